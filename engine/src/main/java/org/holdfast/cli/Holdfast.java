@@ -1,0 +1,87 @@
+package org.holdfast.cli;
+
+import java.io.PrintWriter;
+
+import org.holdfast.bench.BenchCommand;
+import org.holdfast.scenario.ScenarioException;
+
+import picocli.CommandLine;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Spec;
+
+/**
+ * The {@code holdfast} command line. Each subcommand is one class; the viewer module adds its
+ * own ({@code render}, {@code view}) to the same command through {@link #commandLine()}.
+ */
+@Command(name = "holdfast",
+        mixinStandardHelpOptions = true,
+        versionProvider = Version.class,
+        description = {
+            "Galaxy groups against dark energy: evolve a group in an expanding universe, decide",
+            "who stays bound, merges, escapes or is ripped away, sweep parameters, film it.",
+            "",
+            "Example:",
+            "  holdfast expansion scenarios/lambda-today.toml"
+        },
+        subcommands = {
+            CommandLine.HelpCommand.class,
+            BenchCommand.class
+        })
+public final class Holdfast implements Runnable {
+
+    /** Exit code for bad input: an unknown option, a malformed value, an unphysical scenario. */
+    public static final int EXIT_BAD_INPUT = 2;
+
+    /** Exit code for a failure that is not the user's input. */
+    public static final int EXIT_FAILURE = 1;
+
+    @Spec
+    CommandLine.Model.CommandSpec spec;
+
+    @Override
+    public void run() {
+        spec.commandLine().usage(spec.commandLine().getOut());
+    }
+
+    /** The engine's command line, with error handling in place. */
+    public static CommandLine commandLine() {
+        CommandLine cl = new CommandLine(new Holdfast());
+        cl.setExecutionExceptionHandler(Holdfast::handleFailure);
+        cl.setCaseInsensitiveEnumValuesAllowed(true);
+        return cl;
+    }
+
+    public static void main(String[] args) {
+        System.exit(commandLine().execute(args));
+    }
+
+    /**
+     * Bad input becomes one line and exit code 2; anything else one line and exit code 1,
+     * with the stack trace only under {@code HOLDFAST_DEBUG=1}.
+     */
+    static int handleFailure(Exception e, CommandLine cl, CommandLine.ParseResult parsed) {
+        PrintWriter err = cl.getErr();
+        Throwable cause = e;
+        while (cause.getCause() != null && !(cause instanceof ScenarioException)) {
+            cause = cause.getCause();
+        }
+        if (cause instanceof ScenarioException se) {
+            err.println("holdfast " + cl.getCommandName() + ": " + se.getMessage());
+            err.flush();
+            return EXIT_BAD_INPUT;
+        }
+        if (cause instanceof CommandLine.ParameterException pe) {
+            err.println("holdfast " + cl.getCommandName() + ": " + pe.getMessage());
+            err.flush();
+            return EXIT_BAD_INPUT;
+        }
+        err.println("holdfast " + cl.getCommandName() + ": failed: " + e);
+        if ("1".equals(System.getenv("HOLDFAST_DEBUG"))) {
+            e.printStackTrace(err);
+        } else {
+            err.println("(set HOLDFAST_DEBUG=1 to see the stack trace)");
+        }
+        err.flush();
+        return EXIT_FAILURE;
+    }
+}

@@ -1,0 +1,30 @@
+package org.holdfast.scenario;
+
+/**
+ * Turns the raw TOML value of a numeric key into a number. The plain reader accepts only
+ * numbers; a reader that understands uncertain numbers (a distribution written as an inline
+ * table) can take its place, returning a central value or a random draw.
+ */
+@FunctionalInterface
+public interface NumberReader {
+
+    /**
+     * @param node the table holding the key, for error messages
+     * @param key the key inside that table
+     * @param raw what the TOML parser returned: Long, Double, a table, or anything else
+     * @return the number to use
+     * @throws ScenarioException if the value is not a number this reader understands
+     */
+    double read(Node node, String key, Object raw);
+
+    /** The plain reader: integers and floats only. */
+    NumberReader PLAIN = (node, key, raw) -> {
+        if (raw instanceof Double d) {
+            return d;
+        }
+        if (raw instanceof Long l) {
+            return l.doubleValue();
+        }
+        throw node.error(key, "expected a number, got " + Node.describe(raw));
+    };
+}
