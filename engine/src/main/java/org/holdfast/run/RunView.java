@@ -1,0 +1,76 @@
+package org.holdfast.run;
+
+/**
+ * Read-only view of a running simulation, in the centre-of-mass frame, internal units
+ * (kpc, kpc/Gyr, Msun, Gyr). Arrays are the live structure-of-arrays state: index i for bodies,
+ * j for tracers; never modify them.
+ */
+public interface RunView {
+
+    /** Current time, Gyr from today. */
+    double tGyr();
+
+    /** Scale factor at the current time. */
+    double scaleFactor();
+
+    /** Steps taken so far. */
+    long steps();
+
+    /** Number of massive bodies now (mergers reduce it). */
+    int bodyCount();
+
+    /** Name of body i. */
+    String bodyName(int i);
+
+    /** Body masses. */
+    double[] bodyMass();
+
+    /** Body positions, kpc. */
+    double[] bodyX();
+
+    double[] bodyY();
+
+    double[] bodyZ();
+
+    /** Body velocities, kpc/Gyr. */
+    double[] bodyVx();
+
+    double[] bodyVy();
+
+    double[] bodyVz();
+
+    /** Number of massless tracers. */
+    int tracerCount();
+
+    /** Tracer positions, kpc. */
+    double[] tracerX();
+
+    double[] tracerY();
+
+    double[] tracerZ();
+
+    /** Tracer velocities, kpc/Gyr. */
+    double[] tracerVx();
+
+    double[] tracerVy();
+
+    double[] tracerVz();
+
+    /** Index of the body a tracer's stars belong to, or -1 for flow tracers. */
+    int[] tracerHost();
+
+    /** Energy budget now: kinetic + pair potential + dark-energy potential - accumulated work. */
+    double energyBudget();
+
+    /**
+     * Relative residual of the energy budget since the start, |E(t) - E(0)| divided by the
+     * binding-energy scale (documented by the implementation).
+     */
+    double energyResidual();
+
+    /** The initial centre-of-mass position in the user's frame (kpc), subtracted from every body. */
+    double[] frameOffsetKpc();
+
+    /** The initial centre-of-mass velocity in the user's frame (kpc/Gyr). */
+    double[] frameVelocity();
+}
