@@ -67,8 +67,10 @@ public final class ObservedReader {
         boolean icrs = n.has(RA) || n.has(DEC);
         boolean galactic = n.has(L) || n.has(B);
         if (icrs && galactic) {
-            String second = n.lineOf(RA) > n.lineOf(L) ? (n.has(RA) ? RA : DEC) : (n.has(L) ? L : B);
-            throw n.error(second, "give the sky position once: either ra_deg/dec_deg or l_deg/b_deg");
+            String a = first(n, RA, DEC);
+            String b = first(n, L, B);
+            throw n.error(n.lineOf(a) > n.lineOf(b) ? a : b,
+                    "give the sky position once: either ra_deg/dec_deg or l_deg/b_deg");
         }
         if (!icrs && !galactic) {
             throw n.error(null, "missing sky position: give ra_deg and dec_deg (ICRS) or l_deg and b_deg (Galactic)");
@@ -105,6 +107,14 @@ public final class ObservedReader {
     /** Distance in kpc from a distance modulus mu = 5 log10(d / 10 pc). */
     public static double kpcFromModulus(double mu) {
         return Math.pow(10.0, mu / 5.0 - 2.0);
+    }
+
+    /** Whichever of two keys present comes first in the file. */
+    private static String first(Node n, String a, String b) {
+        if (!n.has(a)) {
+            return b;
+        }
+        return !n.has(b) || n.lineOf(a) <= n.lineOf(b) ? a : b;
     }
 
     private static void requireBoth(Node n, String a, String b) {

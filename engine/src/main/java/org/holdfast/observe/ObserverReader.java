@@ -25,6 +25,23 @@ public final class ObserverReader {
     }
 
     /**
+     * The observer for a scenario that has observed members: reads {@code [observer]} from
+     * the root table.
+     *
+     * @param root the scenario's root table
+     * @param observed the first member's {@code observed} table, named in the error if the
+     *     scenario has no {@code [observer]}
+     */
+    public static Observer forObserved(Node root, Node observed) {
+        Node table = root.table("observer");
+        if (table == null) {
+            throw observed.error(null, "a member given by observation needs an [observer] table"
+                    + " naming the home galaxy (galaxy = \"NAME\")");
+        }
+        return read(table);
+    }
+
+    /**
      * @param observer the {@code [observer]} table
      * @throws org.holdfast.scenario.ScenarioException naming file, line and key for an
      *     unknown key, a missing home galaxy, R0 <= 0, or |height| >= R0

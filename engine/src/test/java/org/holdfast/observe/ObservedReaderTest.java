@@ -96,6 +96,25 @@ class ObservedReaderTest {
     }
 
     @Test
+    void twoSkyPositionsNameTheOneThatComesSecond() {
+        ScenarioException e = error("[galaxy.observed]\nb_deg = 4\nl_deg = 3\ndec_deg = 2\n"
+                + "distance_kpc = 300\nv_los_kms = 50");
+        assertEquals("sky.toml:6", e.where());
+        assertEquals("galaxy.Vell.observed.dec_deg", e.key());
+    }
+
+    @Test
+    void anObservedMemberWithoutAnObserverIsAnError() {
+        Node root = ScenarioFile.parse(FILE, "[[galaxy]]\nname = \"Vell\"\nobserved = { ra_deg = 1 }\n",
+                Overrides.none(), NumberReader.PLAIN);
+        Node observed = root.tables("galaxy", "name").get(0).requireTable("observed");
+        ScenarioException e = assertThrows(ScenarioException.class, () -> ObserverReader.forObserved(root, observed));
+        assertEquals("sky.toml:3", e.where());
+        assertEquals("galaxy.Vell.observed", e.key());
+        assertTrue(e.getMessage().contains("needs an [observer] table"), e.getMessage());
+    }
+
+    @Test
     void missingSkyPositionIsAnError() {
         ScenarioException e = error("observed = { distance_kpc = 300, v_los_kms = 50 }");
         assertEquals("sky.toml:3", e.where());
