@@ -3,7 +3,7 @@ package org.holdfast.uncertain;
 import java.nio.charset.StandardCharsets;
 
 import org.apache.commons.rng.UniformRandomProvider;
-import org.apache.commons.rng.simple.RandomSource;
+import org.apache.commons.rng.core.source64.XoRoShiRo128PlusPlus;
 
 /**
  * One independent generator per (seed, draw index, key path). The three are mixed into a
@@ -20,8 +20,7 @@ final class KeyStreams {
     static UniformRandomProvider stream(long seed, long drawIndex, String path) {
         long h = mix(mix(seed + GOLDEN) ^ drawIndex);
         h = mix(h ^ fnv1a(path));
-        long[] state = {mix(h + GOLDEN), mix(h + 2 * GOLDEN)};
-        return RandomSource.XO_RO_SHI_RO_128_PP.create(state);
+        return new XoRoShiRo128PlusPlus(mix(h + GOLDEN), mix(h + 2 * GOLDEN));
     }
 
     /**

@@ -11,6 +11,7 @@ import org.holdfast.scenario.Node;
 import org.holdfast.scenario.Overrides;
 import org.holdfast.scenario.ScenarioFile;
 import org.junit.jupiter.api.Test;
+import org.tomlj.TomlTable;
 
 /**
  * Statistics and reproducibility of seeded draws. Draw i of a scenario is the unit a sweep
@@ -30,12 +31,29 @@ class UncertainSamplingTest {
             "c = { min = -1.3, max = -0.7 }",
             "d = { mean = 770, sigma = 40 }", ""), Overrides.none(), UncertainNumbers.central());
 
+    /**
+     * Draw i = 0 .. N-1 of one key, as the reader makes it: the key's own stream for
+     * (seed, i, path) fed to its distribution ({@link #theReaderDrawsFromTheKeysOwnStream}
+     * checks that this is what the reader returns).
+     */
     private static double[] draws(String key, long seed) {
+        Distribution d = DistributionReader.read(NODE, key, key, (TomlTable) NODE.raw(key));
         double[] x = new double[N];
         for (int i = 0; i < N; i++) {
-            x[i] = UncertainNumbers.sampling(seed, i).read(NODE, key, NODE.raw(key));
+            x[i] = d.draw(KeyStreams.stream(seed, i, key));
         }
         return x;
+    }
+
+    @Test
+    void theReaderDrawsFromTheKeysOwnStream() {
+        for (String key : new String[] {"a", "b", "c"}) {
+            double[] direct = draws(key, 16);
+            for (int i = 0; i < N; i += 997) {
+                assertEquals(direct[i], UncertainNumbers.sampling(16, i).read(NODE, key, NODE.raw(key)),
+                        "key " + key + ", draw " + i);
+            }
+        }
     }
 
     /**
@@ -118,8 +136,10 @@ class UncertainSamplingTest {
 
     @Test
     void theDrawDoesNotDependOnThreads() {
-        double[] serial = draws("b", 15);
-        double[] parallel = IntStream.range(0, N).parallel()
+        double[] serial = IntStream.range(0, N / 10)
+                .mapToDouble(i -> UncertainNumbers.sampling(15, i).read(NODE, "b", NODE.raw("b")))
+                .toArray();
+        double[] parallel = IntStream.range(0, N / 10).parallel()
                 .mapToDouble(i -> UncertainNumbers.sampling(15, i).read(NODE, "b", NODE.raw("b")))
                 .toArray();
         assertArrayEquals(serial, parallel);
