@@ -21,6 +21,7 @@ public final class HomeFrame {
     private final Observer observer;
     private final Matrix3dc tilt;
     private final Matrix3dc skyToHome;
+    private final double[] observerKpc;
 
     public HomeFrame(Observer observer) {
         this.observer = observer;
@@ -31,6 +32,8 @@ public final class HomeFrame {
         }
         this.tilt = new Matrix3d().rotationY(Math.asin(h / r0));
         this.skyToHome = new Matrix3d(tilt).mul(GalacticRotation.icrsToGalactic());
+        Vector3d o = tilt.transform(new Vector3d(-r0, 0, 0));
+        this.observerKpc = new double[] {o.x, o.y, o.z};
     }
 
     /** The observer this frame belongs to. */
@@ -45,7 +48,7 @@ public final class HomeFrame {
 
     /** Where the observer stands: (-sqrt(R0^2 - h^2), 0, h) kpc. */
     public double[] observerPositionKpc() {
-        return helioToHome(new double[3], new double[3]).positionKpc();
+        return observerKpc.clone();
     }
 
     /**
@@ -67,7 +70,7 @@ public final class HomeFrame {
     public MemberState toHome(ObservedMember m) {
         Vector3d uIcrs = GalacticRotation.unitVector(m.raDeg(), m.decDeg(), new Vector3d());
         Vector3d u = skyToHome.transform(uIcrs, new Vector3d());
-        double[] o = observerPositionKpc();
+        double[] o = observerKpc;
         Vector3d r = new Vector3d(u).mul(m.distanceKpc()).add(o[0], o[1], o[2]);
         Vector3d v;
         if (m.hasProperMotion()) {
@@ -87,7 +90,7 @@ public final class HomeFrame {
      * pm_ra_mas_yr, pm_dec_mas_yr}.
      */
     public double[] observe(double[] positionKpc, double[] velocityKms) {
-        double[] o = observerPositionKpc();
+        double[] o = observerKpc;
         Matrix3d homeToIcrs = new Matrix3d(skyToHome).transpose();
         Vector3d r = homeToIcrs.transform(new Vector3d(positionKpc[0] - o[0], positionKpc[1] - o[1], positionKpc[2] - o[2]));
         Vector3d v = homeToIcrs.transform(new Vector3d(velocityKms[0] - observer.uKms(),

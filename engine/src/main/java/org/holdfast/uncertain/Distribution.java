@@ -1,7 +1,5 @@
 package org.holdfast.uncertain;
 
-import java.util.Locale;
-
 import org.apache.commons.math3.special.Erf;
 import org.apache.commons.math3.util.FastMath;
 import org.apache.commons.rng.UniformRandomProvider;
@@ -43,7 +41,7 @@ public sealed interface Distribution {
 
         @Override
         public String describe() {
-            return "normal(mean " + fmt(mean) + ", sigma " + fmt(sigma) + ")";
+            return "normal(mean " + Format.number(mean) + ", sigma " + Format.number(sigma) + ")";
         }
     }
 
@@ -66,7 +64,7 @@ public sealed interface Distribution {
 
         @Override
         public String describe() {
-            return "log-normal(median " + fmt(median) + ", sigma " + fmt(sigmaDex) + " dex)";
+            return "log-normal(median " + Format.number(median) + ", sigma " + Format.number(sigmaDex) + " dex)";
         }
     }
 
@@ -92,7 +90,7 @@ public sealed interface Distribution {
 
         @Override
         public String describe() {
-            return "uniform(min " + fmt(min) + ", max " + fmt(max) + ")";
+            return "uniform(min " + Format.number(min) + ", max " + Format.number(max) + ")";
         }
     }
 
@@ -113,9 +111,5 @@ public sealed interface Distribution {
     /** A uniform double strictly inside (0, 1): (k + 1/2) 2^-53 with k the top 53 bits. */
     static double openUnit(UniformRandomProvider rng) {
         return ((rng.nextLong() >>> 11) + 0.5) * 0x1.0p-53;
-    }
-
-    private static String fmt(double v) {
-        return String.format(Locale.ROOT, "%.6g", v).replaceFirst("\\.?0+(e|$)", "$1");
     }
 }

@@ -39,7 +39,7 @@ final class DistributionReader {
         if (keys.equals(NORMAL)) {
             double sigma = field(node, key, t, "sigma");
             if (sigma < 0) {
-                throw node.error(key, what + ": sigma must be >= 0 (got " + fmt(sigma) + ")");
+                throw node.error(key, what + ": sigma must be >= 0 (got " + Format.number(sigma) + ")");
             }
             return new Distribution.Normal(field(node, key, t, "mean"), sigma);
         }
@@ -47,10 +47,10 @@ final class DistributionReader {
             double median = field(node, key, t, "median");
             double sigmaDex = field(node, key, t, "sigma_dex");
             if (!(median > 0)) {
-                throw node.error(key, what + ": a log-normal needs median > 0 (got " + fmt(median) + ")");
+                throw node.error(key, what + ": a log-normal needs median > 0 (got " + Format.number(median) + ")");
             }
             if (sigmaDex < 0) {
-                throw node.error(key, what + ": sigma_dex must be >= 0 (got " + fmt(sigmaDex) + ")");
+                throw node.error(key, what + ": sigma_dex must be >= 0 (got " + Format.number(sigmaDex) + ")");
             }
             return new Distribution.LogNormal(median, sigmaDex);
         }
@@ -58,8 +58,8 @@ final class DistributionReader {
             double min = field(node, key, t, "min");
             double max = field(node, key, t, "max");
             if (min > max) {
-                throw node.error(key, what + ": min must not exceed max (got min " + fmt(min)
-                        + ", max " + fmt(max) + ")");
+                throw node.error(key, what + ": min must not exceed max (got min " + Format.number(min)
+                        + ", max " + Format.number(max) + ")");
             }
             return new Distribution.Uniform(min, max);
         }
@@ -107,9 +107,5 @@ final class DistributionReader {
 
     private static String percent(double p) {
         return String.format(Locale.ROOT, "%.2g%%", 100 * p);
-    }
-
-    private static String fmt(double v) {
-        return String.format(Locale.ROOT, "%.6g", v);
     }
 }

@@ -4,7 +4,6 @@ import java.util.ArrayList;
 import java.util.Collections;
 import java.util.LinkedHashMap;
 import java.util.List;
-import java.util.Locale;
 import java.util.Map;
 import java.util.stream.Collectors;
 
@@ -92,7 +91,8 @@ public final class UncertainNumbers implements NumberReader {
 
     /**
      * One line for the user: which keys were uncertain and what was used, e.g.
-     * "used central values for: galaxy.Ar.mass_msun = 1.5e+12 (log-normal(...))"; empty if
+     * "used central values for 1 uncertain value: galaxy.Ar.mass_msun = 1.5e+12
+     * (log-normal(median 1.5e+12, sigma 0.2 dex))"; empty if
      * the scenario had no uncertain numbers.
      */
     public String summary() {
@@ -104,7 +104,7 @@ public final class UncertainNumbers implements NumberReader {
                 : "used central values for ";
         return head + used.size() + " uncertain value" + (used.size() == 1 ? "" : "s") + ": "
                 + used.values().stream()
-                        .map(u -> u.path() + " = " + String.format(Locale.ROOT, "%.6g", u.value())
+                        .map(u -> u.path() + " = " + Format.number(u.value())
                                 + " (" + u.distribution().describe() + ")")
                         .collect(Collectors.joining(", "));
     }

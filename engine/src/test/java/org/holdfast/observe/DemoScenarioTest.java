@@ -54,7 +54,7 @@ class DemoScenarioTest {
         assertEquals(2, warnings.size(), warnings.toString());
         assertTrue(warnings.get(0).contains("galaxy.Quillon.observed"), warnings.get(0));
         assertTrue(reader.summary().startsWith("used central values for 20 uncertain values: "
-                + "observer.distance_to_centre_kpc = 8.20000"), reader.summary());
+                + "observer.distance_to_centre_kpc = 8.2 (normal(mean 8.2, sigma 0.1))"), reader.summary());
         assertTrue(reader.warnings().isEmpty(), reader.warnings().toString());
     }
 

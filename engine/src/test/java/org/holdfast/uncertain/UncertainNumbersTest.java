@@ -47,7 +47,7 @@ class UncertainNumbersTest {
         assertEquals(List.of("galaxy.Ossel.mass_msun", "galaxy.Ossel.speed_kms", "galaxy.Ossel.w",
                 "galaxy.Ossel.velocity_kms.0", "galaxy.Ossel.velocity_kms.2"), paths);
         assertTrue(reader.summary().startsWith("used central values for 5 uncertain values: "
-                + "galaxy.Ossel.mass_msun = 1.50000e+12 (log-normal(median 1.5e+12, sigma 0.2 dex))"),
+                + "galaxy.Ossel.mass_msun = 1.5e+12 (log-normal(median 1.5e+12, sigma 0.2 dex))"),
                 reader.summary());
         assertTrue(reader.warnings().isEmpty());
     }

@@ -48,10 +48,10 @@ class UncertainSamplingTest {
     @Test
     void theReaderDrawsFromTheKeysOwnStream() {
         for (String key : new String[] {"a", "b", "c"}) {
-            double[] direct = draws(key, 16);
+            Distribution d = DistributionReader.read(NODE, key, key, (TomlTable) NODE.raw(key));
             for (int i = 0; i < N; i += 997) {
-                assertEquals(direct[i], UncertainNumbers.sampling(16, i).read(NODE, key, NODE.raw(key)),
-                        "key " + key + ", draw " + i);
+                assertEquals(d.draw(KeyStreams.stream(16, i, key)),
+                        UncertainNumbers.sampling(16, i).read(NODE, key, NODE.raw(key)), "key " + key + ", draw " + i);
             }
         }
     }
