@@ -10,6 +10,11 @@ import org.holdfast.group.GalaxySpec;
 import org.holdfast.group.GroupSpec;
 import org.holdfast.group.HaloSpec;
 import org.holdfast.group.StarsSpec;
+import org.holdfast.observe.HomeFrame;
+import org.holdfast.observe.MemberState;
+import org.holdfast.observe.ObservedReader;
+import org.holdfast.observe.Observer;
+import org.holdfast.observe.ObserverReader;
 
 /**
  * Reads the members ({@code [[galaxy]]}) and the flow tracers ({@code [flow]}) of a scenario.
@@ -29,14 +34,43 @@ public final class GroupReader {
 
     /** Reads the group from the scenario's root table. */
     public static GroupSpec read(Node root) {
+        return read(root, new ArrayList<>());
+    }
+
+    /**
+     * Reads the group from the scenario's root table; members given by observation are
+     * converted to positions and velocities around the home galaxy, and the assumptions made
+     * for them are added to {@code warnings}.
+     */
+    public static GroupSpec read(Node root, List<String> warnings) {
         List<Node> nodes = root.tables("galaxy", "name");
         if (nodes.isEmpty()) {
             throw root.error(null, "a scenario needs at least one [[galaxy]]");
         }
+        Node firstObserved = null;
+        for (Node g : nodes) {
+            if (g.hasInFile("observed")) {
+                firstObserved = g.requireTable("observed");
+                break;
+            }
+        }
+        Observer observer = firstObserved == null ? null : ObserverReader.forObserved(root, firstObserved);
+        Node home = observer == null ? null : homeNode(root, nodes, observer);
+        double[] homePos = home == null ? null : home.vector("position_kpc", 3);
+        double[] homeVel = home == null ? null
+                : home.has("velocity_kms") ? home.vector("velocity_kms", 3) : new double[3];
+        HomeFrame frame = observer == null ? null : new HomeFrame(observer);
         List<GalaxySpec> galaxies = new ArrayList<>();
         Map<String, Node> byName = new HashMap<>();
         for (Node g : nodes) {
-            GalaxySpec spec = galaxy(g);
+            GalaxySpec spec;
+            if (g.hasInFile("observed")) {
+                MemberState s = frame.toHome(ObservedReader.read(g.requireTable("observed")));
+                warnings.addAll(s.warnings());
+                spec = galaxy(g, add(homePos, s.positionKpc()), add(homeVel, s.velocityKms()));
+            } else {
+                spec = galaxy(g, null, null);
+            }
             Node earlier = byName.put(spec.name(), g);
             if (earlier != null) {
                 throw g.error("name", "duplicate galaxy name '" + spec.name() + "' (first used at line "
@@ -61,8 +95,30 @@ public final class GroupReader {
         return group;
     }
 
-    static GalaxySpec galaxy(Node g) {
-        g.allowOnly("name", "mass_msun", "position_kpc", "velocity_kms", "halo", "stars");
+    private static Node homeNode(Node root, List<Node> nodes, Observer observer) {
+        for (Node g : nodes) {
+            if (observer.homeGalaxy().equals(g.string("name"))) {
+                if (g.hasInFile("observed")) {
+                    throw g.error("observed", "the home galaxy '" + observer.homeGalaxy()
+                            + "' is where the observer is: give its position_kpc, not an observed table");
+                }
+                return g;
+            }
+        }
+        Node obs = root.requireTable("observer");
+        throw obs.error("galaxy", "no [[galaxy]] is named '" + observer.homeGalaxy() + "'");
+    }
+
+    private static double[] add(double[] a, double[] b) {
+        return new double[] {a[0] + b[0], a[1] + b[1], a[2] + b[2]};
+    }
+
+    /**
+     * Reads one member; {@code pos} and {@code vel} replace position_kpc and velocity_kms for
+     * a member given by observation (null otherwise).
+     */
+    static GalaxySpec galaxy(Node g, double[] observedPos, double[] observedVel) {
+        g.allowOnly("name", "mass_msun", "position_kpc", "velocity_kms", "observed", "halo", "stars");
         String name = g.string("name");
         if (name.isBlank()) {
             throw g.error("name", "a galaxy name must not be empty");
@@ -71,8 +127,20 @@ public final class GroupReader {
             throw g.error(null, "galaxy '" + name + "' has no mass_msun");
         }
         double mass = g.positive("mass_msun");
-        double[] pos = g.vector("position_kpc", 3);
-        double[] vel = g.has("velocity_kms") ? g.vector("velocity_kms", 3) : new double[3];
+        double[] pos;
+        double[] vel;
+        if (observedPos != null) {
+            for (String k : new String[] {"position_kpc", "velocity_kms"}) {
+                if (g.hasInFile(k)) {
+                    throw g.error(k, "give either " + k + " or observed, not both");
+                }
+            }
+            pos = observedPos;
+            vel = observedVel;
+        } else {
+            pos = g.vector("position_kpc", 3);
+            vel = g.has("velocity_kms") ? g.vector("velocity_kms", 3) : new double[3];
+        }
         Node haloNode = g.table("halo");
         HaloSpec halo = haloNode == null ? HaloSpec.point(0.0) : halo(haloNode);
         Node starsNode = g.table("stars");
