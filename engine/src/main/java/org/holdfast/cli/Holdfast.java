@@ -26,6 +26,7 @@ import picocli.CommandLine.Spec;
         subcommands = {
             CommandLine.HelpCommand.class,
             ExpansionCommand.class,
+            ValidateCommand.class,
             BenchCommand.class
         })
 public final class Holdfast implements Runnable {
