@@ -15,10 +15,12 @@ import org.holdfast.units.Units;
  * in Newton's theorems). Differentiating under the integral gives dW/dd exactly, using
  * Psi_2'(s) = Phi_2(s) s.
  *
- * <p>The r integral runs in ln r with 8-point Gauss–Legendre panels at most 0.5 wide in ln r,
+ * <p>The r integral runs in ln r with 8-point Gauss–Legendre panels at most 0.2 wide in ln r,
  * split at d, at both halos' lengths and edges; the innermost mass (below 1e-8 of the smaller
  * length) sees Phi_2(d), and for an untruncated halo 1 the mass beyond 1e6 lengths sees
- * -G M_2 / r (Newton's first theorem), both in closed form.
+ * -G M_2 / r (Newton's first theorem), both in closed form. Where one of r and d is below 1e-4 of
+ * the other the shell mean is its Taylor series, Phi_2 + (x^2/6) 4 pi G rho_2 with x the smaller
+ * (the mean of a function over a small sphere; Poisson's equation), which avoids cancellation.
  */
 public final class InteractionIntegral {
 
@@ -28,7 +30,7 @@ public final class InteractionIntegral {
     private static final double[] GL_W = {
         0.1012285362903763, 0.2223810344533745, 0.3137066458778873, 0.3626837833783620,
         0.3626837833783620, 0.3137066458778873, 0.2223810344533745, 0.1012285362903763};
-    private static final double MAX_PANEL = 0.5;
+    private static final double MAX_PANEL = 0.2;
 
     private InteractionIntegral() {
     }
@@ -92,8 +94,14 @@ public final class InteractionIntegral {
     private static double[] breakpoints(HaloProfile h1, HaloProfile h2, double d, double rLo, double rHi) {
         double e2 = h2.extentKpc();
         double l2 = h2.lengthKpc();
-        double[] raw = {rLo, rHi, d, h1.lengthKpc(), h1.extentKpc(), Math.abs(d - e2), d + e2,
+        double[] base = {rLo, rHi, d, h1.lengthKpc(), h1.extentKpc(), Math.abs(d - e2), d + e2,
             Math.abs(d - l2), d + l2, l2};
+        // a mesh graded toward r = d, where the shell touches halo 2's centre and its cusp
+        double[] raw = Arrays.copyOf(base, base.length + 16);
+        for (int k = 1; k <= 8; k++) {
+            raw[base.length + 2 * k - 2] = d * (1 - Math.pow(10, -k));
+            raw[base.length + 2 * k - 1] = d * (1 + Math.pow(10, -k));
+        }
         double[] inside = Arrays.stream(raw).filter(r -> r >= rLo && r <= rHi && Double.isFinite(r)).sorted()
                 .distinct().toArray();
         return inside;
@@ -105,6 +113,10 @@ public final class InteractionIntegral {
             // Taylor series: the mean over a small sphere is Phi + r^2/6 laplacian(Phi) = Phi + r^2/6 4 pi G rho
             return h2.potential(d) + r * r / 6 * 4 * Math.PI * Units.G * h2.density(d);
         }
+        if (d < 1e-4 * r) {
+            // the same series in the offset d: the mean over a sphere of radius r about halo 2's centre is Phi_2(r)
+            return h2.potential(r) + d * d / 6 * 4 * Math.PI * Units.G * h2.density(r);
+        }
         return (h2.potentialMoment(d + r) - h2.potentialMoment(Math.abs(d - r))) / (2 * r * d);
     }
 
@@ -112,6 +124,9 @@ public final class InteractionIntegral {
     static double shellMeanSlope(HaloProfile h2, double r, double d) {
         if (r < 1e-4 * d) {
             return Units.G * h2.enclosedMass(d) / (d * d);
+        }
+        if (d < 1e-4 * r) {
+            return d / 3 * 4 * Math.PI * Units.G * h2.density(r);
         }
         double far = d + r;
         double near = Math.abs(d - r);

@@ -82,10 +82,10 @@ public final class TabulatedKernel implements PairKernel {
     @Override
     public double pullOverD(double d) {
         if (d <= dLo) {
-            return -2 * coreC;
+            return 2 * coreC;
         }
         if (d >= dHi) {
-            return exactFar ? Units.G / (d * d * d) : (farAlpha / d + 2 * farBeta / (d * d)) / (d * d);
+            return exactFar ? Units.G / (d * d * d) : -(farAlpha / d + 2 * farBeta / (d * d)) / (d * d);
         }
         double x = (Math.log(d) - uLo) / du;
         int k = Math.min((int) x, w.length - 2);
@@ -93,7 +93,7 @@ public final class TabulatedKernel implements PairKernel {
         double t2 = t * t;
         double dwdu = ((6 * t2 - 6 * t) * (w[k] - w[k + 1])
                 + (3 * t2 - 4 * t + 1) * du * g[k] + (3 * t2 - 2 * t) * du * g[k + 1]) / du;
-        return -dwdu / (d * d);
+        return dwdu / (d * d);
     }
 
     @Override
