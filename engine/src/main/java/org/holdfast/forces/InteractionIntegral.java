@@ -15,8 +15,8 @@ import org.holdfast.units.Units;
  * in Newton's theorems). Differentiating under the integral gives dW/dd exactly, using
  * Psi_2'(s) = Phi_2(s) s.
  *
- * <p>The r integral runs in ln r with 8-point Gauss–Legendre panels at most 0.2 wide in ln r,
- * split at d, at both halos' lengths and edges; the innermost mass (below 1e-8 of the smaller
+ * <p>The r integral runs in ln r with 8-point Gauss–Legendre panels at most 0.35 wide in ln r,
+ * split at d, at both halos' lengths and edges; the innermost mass (below 1e-6 of the smaller
  * length) sees Phi_2(d), and for an untruncated halo 1 the mass beyond 1e6 lengths sees
  * -G M_2 / r (Newton's first theorem), both in closed form. Where one of r and d is below 1e-4 of
  * the other the shell mean is its Taylor series, Phi_2 + (x^2/6) 4 pi G rho_2 with x the smaller
@@ -30,7 +30,7 @@ public final class InteractionIntegral {
     private static final double[] GL_W = {
         0.1012285362903763, 0.2223810344533745, 0.3137066458778873, 0.3626837833783620,
         0.3626837833783620, 0.3137066458778873, 0.2223810344533745, 0.1012285362903763};
-    private static final double MAX_PANEL = 0.2;
+    private static final double MAX_PANEL = 0.35;
 
     private InteractionIntegral() {
     }
@@ -42,7 +42,7 @@ public final class InteractionIntegral {
      */
     public static double[] evaluate(HaloProfile h1, HaloProfile h2, double d) {
         double len1 = h1.lengthKpc();
-        double rLo = 1e-8 * Math.min(d, len1);
+        double rLo = 1e-6 * Math.min(d, len1);
         boolean finite1 = Double.isFinite(h1.extentKpc());
         double rHi = finite1 ? h1.extentKpc() : 1e6 * Math.max(d, Math.max(len1, reach(h2)));
         double[] cuts = breakpoints(h1, h2, d, rLo, rHi);
@@ -65,8 +65,9 @@ public final class InteractionIntegral {
                     if (dm == 0) {
                         continue;
                     }
-                    pw += dm * shellMean(h2, r, d);
-                    pdw += dm * shellMeanSlope(h2, r, d);
+                    double mean = shellMean(h2, r, d);
+                    pw += dm * mean;
+                    pdw += dm * shellMeanSlope(h2, r, d, mean);
                 }
                 // Neumaier summation across panels
                 double t = w + pw;
@@ -121,7 +122,7 @@ public final class InteractionIntegral {
     }
 
     /** d/dd of {@link #shellMean}. */
-    static double shellMeanSlope(HaloProfile h2, double r, double d) {
+    static double shellMeanSlope(HaloProfile h2, double r, double d, double mean) {
         if (r < 1e-4 * d) {
             return Units.G * h2.enclosedMass(d) / (d * d);
         }
@@ -131,6 +132,6 @@ public final class InteractionIntegral {
         double far = d + r;
         double near = Math.abs(d - r);
         double diff = h2.potential(far) * far - (near == 0 ? 0 : h2.potential(near) * (d - r));
-        return diff / (2 * r * d) - shellMean(h2, r, d) / d;
+        return diff / (2 * r * d) - mean / d;
     }
 }

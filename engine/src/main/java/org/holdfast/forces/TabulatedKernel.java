@@ -18,7 +18,7 @@ import org.holdfast.units.Units;
 public final class TabulatedKernel implements PairKernel {
 
     /** Grid nodes per decade of d. */
-    static final int PER_DECADE = 48;
+    static final int PER_DECADE = 64;
 
     private final double uLo;
     private final double du;

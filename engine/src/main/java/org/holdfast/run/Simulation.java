@@ -197,7 +197,10 @@ public final class Simulation implements RunView, AutoCloseable {
     /** The signed step toward target: fixed or adaptive, landing on it, every sub-step inside the history. */
     private double chooseStep(double target) {
         double t = system.time();
-        double limit = target - t;
+        double toTarget = target - t;
+        double room = historyRoom(t, Math.signum(toTarget));
+        boolean clipped = room < Math.abs(toTarget);
+        double limit = clipped ? Math.copySign(room, toTarget) : toTarget;
         double h;
         if (stepSize == null) {
             h = Math.copySign(settings.stepMyr() * Units.MYR, limit);
@@ -207,20 +210,20 @@ public final class Simulation implements RunView, AutoCloseable {
         if (Math.abs(h) >= Math.abs(limit) * (1 - 1e-9)) {
             h = limit;
         }
-        double hi = history.latestGyr();
-        double lo = history.earliestGyr();
-        double up = h > 0 ? integrator.maxTimeFraction() : integrator.minTimeFraction();
-        double down = h > 0 ? integrator.minTimeFraction() : integrator.maxTimeFraction();
-        if (up * h > 0 && t + up * h > hi) {
-            h = (hi - t) / up;
-        }
-        if (down * h < 0 && t + down * h < lo) {
-            h = (lo - t) / down;
-        }
-        if (up * h < 0 && t + up * h < lo) {
-            h = (lo - t) / up;
-        }
         return h;
+    }
+
+    /** The longest step in direction dir whose sub-steps all stay inside the expansion history. */
+    private double historyRoom(double t, double dir) {
+        double ahead = dir > 0 ? history.latestGyr() - t : t - history.earliestGyr();
+        double behind = dir > 0 ? t - history.earliestGyr() : history.latestGyr() - t;
+        double over = integrator.maxTimeFraction();
+        double under = -integrator.minTimeFraction();
+        double room = ahead / over;
+        if (under > 0) {
+            room = Math.min(room, behind / under);
+        }
+        return Math.max(room, 0);
     }
 
     private StopReason checkFinite() {
