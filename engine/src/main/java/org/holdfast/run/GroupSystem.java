@@ -1,0 +1,175 @@
+package org.holdfast.run;
+
+import org.holdfast.forces.BackgroundTide;
+import org.holdfast.forces.Bodies;
+import org.holdfast.forces.CompensatedSum;
+import org.holdfast.forces.PairGravity;
+import org.holdfast.forces.TracerField;
+import org.holdfast.forces.Tracers;
+import org.holdfast.integrators.TrialSystem;
+
+/**
+ * A group as the integrators see it: bodies under pair gravity and the background tide,
+ * tracers in their field, one clock, and the energy budget
+ * E = K + W + U(t) - integral of dU/dt|explicit dt, with U = -(1/2) c(t) sum m r^2.
+ * The work integral is accumulated over each drift, where the positions move on straight lines
+ * and only the clock runs, with 3-point Gauss–Legendre quadrature (exact for the quadratic
+ * sum m r^2 times a cubic c'(t)).
+ */
+final class GroupSystem implements TrialSystem {
+
+    private static final double[] GL_NODES = {-Math.sqrt(0.6), 0, Math.sqrt(0.6)};
+    private static final double[] GL_WEIGHTS = {5.0 / 9, 8.0 / 9, 5.0 / 9};
+
+    final Bodies bodies;
+    final Tracers tracers;
+    final PairGravity gravity;
+    final BackgroundTide tide;
+    final TracerField field;
+    private double t;
+    private boolean trial;
+    private final CompensatedSum work = new CompensatedSum();
+    private final double[] saved;
+    private double savedT;
+    private double savedWork;
+
+    GroupSystem(Bodies bodies, Tracers tracers, PairGravity gravity, BackgroundTide tide, TracerField field,
+            double startGyr) {
+        this.bodies = bodies;
+        this.tracers = tracers;
+        this.gravity = gravity;
+        this.tide = tide;
+        this.field = field;
+        this.t = startGyr;
+        this.saved = new double[9 * bodies.x.length];
+    }
+
+    double time() {
+        return t;
+    }
+
+    /** Sets the clock exactly (to land on a snapshot time without round-off). */
+    void setTime(double tGyr) {
+        t = tGyr;
+    }
+
+    @Override
+    public void kick(double h) {
+        Bodies b = bodies;
+        for (int i = 0; i < b.count(); i++) {
+            b.vx[i] += h * b.ax[i];
+            b.vy[i] += h * b.ay[i];
+            b.vz[i] += h * b.az[i];
+        }
+        if (!trial && tracers.count > 0) {
+            field.kick(tracers, h);
+        }
+    }
+
+    @Override
+    public void drift(double h) {
+        Bodies b = bodies;
+        if (tide.active()) {
+            accumulateWork(h);
+        }
+        for (int i = 0; i < b.count(); i++) {
+            b.x[i] += h * b.vx[i];
+            b.y[i] += h * b.vy[i];
+            b.z[i] += h * b.vz[i];
+        }
+        if (!trial && tracers.count > 0) {
+            field.drift(tracers, h);
+        }
+        t += h;
+    }
+
+    private void accumulateWork(double h) {
+        Bodies b = bodies;
+        double q0 = 0;
+        double p = 0;
+        double v = 0;
+        for (int i = 0; i < b.count(); i++) {
+            double m = b.mass[i];
+            q0 += m * (b.x[i] * b.x[i] + b.y[i] * b.y[i] + b.z[i] * b.z[i]);
+            p += m * (b.x[i] * b.vx[i] + b.y[i] * b.vy[i] + b.z[i] * b.vz[i]);
+            v += m * (b.vx[i] * b.vx[i] + b.vy[i] * b.vy[i] + b.vz[i] * b.vz[i]);
+        }
+        double sum = 0;
+        for (int k = 0; k < 3; k++) {
+            double s = 0.5 * h * (1 + GL_NODES[k]);
+            double q = q0 + 2 * s * p + s * s * v;
+            sum += GL_WEIGHTS[k] * (-0.5) * tide.rate(t + s) * q;
+        }
+        work.add(0.5 * h * sum);
+    }
+
+    @Override
+    public void updateAccelerations() {
+        Bodies b = bodies;
+        double c = tide.coefficient(t);
+        java.util.Arrays.fill(b.ax, 0, b.count(), 0);
+        java.util.Arrays.fill(b.ay, 0, b.count(), 0);
+        java.util.Arrays.fill(b.az, 0, b.count(), 0);
+        gravity.accelerate(b);
+        if (c != 0) {
+            tide.accelerate(b, c);
+        }
+        if (!trial && tracers.count > 0) {
+            field.accelerate(tracers, b, c);
+        }
+    }
+
+    @Override
+    public double timescale() {
+        double tau = gravity.timescale(bodies);
+        if (tide.active()) {
+            double c = tide.coefficient(t);
+            double rate = tide.rate(t);
+            if (c != 0) {
+                tau = Math.min(tau, 1 / Math.sqrt(Math.abs(c)));
+                if (rate != 0) {
+                    tau = Math.min(tau, Math.abs(c / rate));
+                }
+            }
+        }
+        return tau;
+    }
+
+    @Override
+    public void beginTrial() {
+        bodies.copyStateTo(saved);
+        savedT = t;
+        savedWork = work.value();
+        trial = true;
+    }
+
+    @Override
+    public void endTrial() {
+        bodies.restoreStateFrom(saved);
+        t = savedT;
+        work.set(savedWork);
+        trial = false;
+    }
+
+    /** Kinetic energy of the bodies, Msun kpc^2/Gyr^2. */
+    double kineticEnergy() {
+        CompensatedSum k = new CompensatedSum();
+        Bodies b = bodies;
+        for (int i = 0; i < b.count(); i++) {
+            k.add(0.5 * b.mass[i] * (b.vx[i] * b.vx[i] + b.vy[i] * b.vy[i] + b.vz[i] * b.vz[i]));
+        }
+        return k.value();
+    }
+
+    /** The energy budget now. */
+    double energyBudget() {
+        CompensatedSum e = new CompensatedSum();
+        e.add(kineticEnergy());
+        e.add(gravity.energy(bodies));
+        if (tide.active()) {
+            e.add(-0.5 * tide.coefficient(t) * BackgroundTide.secondMoment(bodies));
+        }
+        e.add(-work.value());
+        return e.value();
+    }
+}
