@@ -26,6 +26,7 @@ import picocli.CommandLine.Spec;
         subcommands = {
             CommandLine.HelpCommand.class,
             ExpansionCommand.class,
+            EvolveCommand.class,
             ValidateCommand.class,
             BenchCommand.class
         })

@@ -54,10 +54,12 @@ public final class RunPlots {
         if (hasFinite(zg)) {
             Charts.guide(c, "zero-gravity radius", t, capped(zg, 3 * Math.max(max, 1)));
         }
+        int row = 0;
         for (RunEvent ev : events) {
             c.addAnnotation(new AnnotationLine(ev.tGyr(), true, false));
-            c.addAnnotation(new AnnotationText(ev.kind() + ": " + String.join(", ", ev.members()),
-                    ev.tGyr(), max * 0.95, false));
+            // Stack the labels downward so that events close in time stay readable.
+            double y = max * (0.97 - 0.05 * (row++ % 12));
+            c.addAnnotation(new AnnotationText(ev.kind() + ": " + String.join(", ", ev.members()), ev.tGyr(), y, false));
         }
         Charts.savePng(c, file);
     }
