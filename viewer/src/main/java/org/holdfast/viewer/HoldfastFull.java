@@ -1,6 +1,8 @@
 package org.holdfast.viewer;
 
 import org.holdfast.cli.Holdfast;
+import org.holdfast.window.FrameSources;
+import org.holdfast.window.ViewCommand;
 
 import picocli.CommandLine;
 
@@ -15,7 +17,13 @@ public final class HoldfastFull {
 
     /** The full command line. */
     public static CommandLine commandLine() {
+        return commandLine(FrameSources::open);
+    }
+
+    /** The full command line, with {@code holdfast view} taking its frames from {@code sources}. */
+    public static CommandLine commandLine(FrameSources.SourceOpener sources) {
         CommandLine cl = Holdfast.commandLine();
+        cl.addSubcommand("view", new ViewCommand(sources));
         return cl;
     }
 

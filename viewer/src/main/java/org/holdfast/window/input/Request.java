@@ -1,0 +1,13 @@
+package org.holdfast.window.input;
+
+/** What the window must do after an event, beyond taking the new view state. */
+public enum Request {
+    /** Nothing more. */
+    NONE,
+    /** Save a PNG of the frame as shown. */
+    SCREENSHOT,
+    /** Save a PNG at the large screenshot size, drawn afresh by the frame source. */
+    SCREENSHOT_LARGE,
+    /** Close the window. */
+    QUIT
+}
