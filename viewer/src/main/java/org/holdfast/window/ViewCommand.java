@@ -191,8 +191,8 @@ public final class ViewCommand implements Callable<Integer> {
         double t = t0;
         if (atGyr != null) {
             if (!(atGyr >= t0 && atGyr <= t1)) {
-                throw new BadOption(String.format(Locale.ROOT,
-                        "--at-gyr: %s lies outside this run, which spans %.4g to %.4g Gyr", atGyr, t0, t1));
+                throw new BadOption("--at-gyr: " + plain(atGyr) + " lies outside this run, which spans "
+                        + plain(t0) + " to " + plain(t1) + " Gyr");
             }
             t = atGyr;
         }
@@ -202,6 +202,10 @@ public final class ViewCommand implements Callable<Integer> {
         Camera c = cam != null ? cam.camera(p)
                 : new Camera(0, 0, 0, clampDistance(source.overviewDistanceKpc()), 30, 20, Camera.DEFAULT_FOV_DEG, p);
         return ViewState.of(c, new Clock(t, rate, true, play));
+    }
+
+    private static String plain(double v) {
+        return Double.isFinite(v) ? java.math.BigDecimal.valueOf(v).stripTrailingZeros().toPlainString() : Double.toString(v);
     }
 
     private static double clampDistance(double d) {

@@ -16,10 +16,12 @@ public class PatternSource implements FrameSource {
     public static final double ORBIT_KPC = 100.0;
 
     private int drawCount;
+    private ViewState lastView;
 
     @Override
     public void draw(ViewState view, int width, int height, int[] argb) {
         drawCount++;
+        lastView = view;
         Camera c = view.camera();
         int shiftR = (int) Math.floor(c.yawDeg());
         int shiftG = (int) Math.floor(3 * c.pitchDeg());
@@ -33,6 +35,18 @@ public class PatternSource implements FrameSource {
                 argb[x + y * width] = 0xFF000000 | r << 16 | g << 8 | b;
             }
         }
+    }
+
+    /** The view of the latest frame drawn, or null. */
+    public ViewState lastView() {
+        return lastView;
+    }
+
+    /** A fresh frame of this pattern for {@code view}. */
+    public static int[] frame(ViewState view, int width, int height) {
+        int[] argb = new int[width * height];
+        new PatternSource().draw(view, width, height, argb);
+        return argb;
     }
 
     /** How many frames were drawn. */

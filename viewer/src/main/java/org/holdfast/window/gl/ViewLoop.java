@@ -45,7 +45,8 @@ public final class ViewLoop implements InputSink {
     private final Settings settings;
     private final String inputName;
     private final PrintWriter out;
-    private final ArrayDeque<Request> requests = new ArrayDeque<>();
+    private final ArrayDeque<Request> shotRequests = new ArrayDeque<>();
+    private boolean quitRequested;
 
     private GlWindow window;
     private int[] frame = new int[0];
@@ -81,15 +82,15 @@ public final class ViewLoop implements InputSink {
         long lastNs = startNs;
         double sinceTitle = TITLE_INTERVAL_S;
         Path written = null;
-        while (!window.closeRequested() && (limit <= 0 || frames < limit)) {
+        while (!window.closeRequested() && !quitRequested && (limit <= 0 || frames < limit)) {
             window.pollEvents();
+            if (quitRequested) {
+                break;
+            }
             long now = System.nanoTime();
             double dt = (now - lastNs) * 1e-9;
             lastNs = now;
             controls.tick(frames == 0 ? 0.0 : dt);
-            if (!handleRequestsBeforeDraw()) {
-                break;
-            }
             int[] fb = window.framebufferSize();
             if (fb[0] <= 0 || fb[1] <= 0) {
                 window.waitEvents(0.1);
@@ -127,18 +128,9 @@ public final class ViewLoop implements InputSink {
         return new Outcome(frames, early, written);
     }
 
-    /** Acts on a quit; false when the loop must end. */
-    private boolean handleRequestsBeforeDraw() {
-        if (requests.remove(Request.QUIT)) {
-            window.requestClose();
-            return false;
-        }
-        return true;
-    }
-
     private void handleShotRequests(ViewState view) throws IOException {
-        while (!requests.isEmpty()) {
-            Request r = requests.poll();
+        while (!shotRequests.isEmpty()) {
+            Request r = shotRequests.poll();
             if (r == Request.SCREENSHOT) {
                 Path p = readBackTo(Screenshots.nextFreeName(settings.shotsDir()));
                 out.println("saved " + p + " (" + frameWidth + "x" + frameHeight + ")");
@@ -202,8 +194,10 @@ public final class ViewLoop implements InputSink {
     @Override
     public void keyPressed(int key, int mods) {
         Request r = controls.keyPressed(key, mods);
-        if (r != Request.NONE) {
-            requests.add(r);
+        if (r == Request.QUIT) {
+            quitRequested = true;
+        } else if (r != Request.NONE) {
+            shotRequests.add(r);
         }
     }
 
