@@ -8,6 +8,7 @@ import java.util.concurrent.Callable;
 
 import org.holdfast.window.FrameSources.CannotOpenException;
 import org.holdfast.window.FrameSources.SourceOpener;
+import org.holdfast.window.gl.GlWindow;
 import org.holdfast.window.gl.NoDisplayException;
 import org.holdfast.window.gl.ViewLoop;
 import org.holdfast.window.input.Bindings;
@@ -23,9 +24,10 @@ import picocli.CommandLine.Spec;
 @Command(name = "view",
         mixinStandardHelpOptions = true,
         description = {
-            "Opens a window on a finished run (its folder of snapshots) or on a scenario evolved",
-            "live as the clock plays. Drag to turn the camera, wheel to zoom, H for the keys.",
-            "With --frames it runs a fixed number of frames and quits, for rehearsals and tests.",
+            "Opens a window on a finished run (its folder of snapshots) or on a scenario",
+            "evolved live as the clock plays. Drag to turn the camera, wheel to zoom, H in",
+            "the window (or --keys) for the keys. With --frames it shows that many frames",
+            "and quits: for rehearsals and tests.",
             "",
             "Examples:",
             "  holdfast view runs/tessera-trio",
@@ -124,6 +126,9 @@ public final class ViewCommand implements Callable<Integer> {
         }
         if (!Files.exists(input)) {
             return fail("RUN_DIR|SCENARIO: '" + input + "' does not exist");
+        }
+        if (!GlWindow.displayNamed()) {
+            return fail(GlWindow.NO_DISPLAY + "; use holdfast render to make pictures without a window");
         }
         try (FrameSource source = opener.open(input)) {
             ViewState start;

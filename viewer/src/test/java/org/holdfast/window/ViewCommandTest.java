@@ -48,6 +48,13 @@ class ViewCommandTest {
     }
 
     @Test
+    void malformedCommandLinesAreOneLineToo() {
+        assertOneLineNaming(pattern("view", dir.toString(), "--frames", "many"), "--frames", "many", "--help");
+        assertOneLineNaming(pattern("view", dir.toString(), "--at-gyr", "soon"), "--at-gyr");
+        assertOneLineNaming(pattern("view", dir.toString(), "--spin"), "--spin");
+    }
+
+    @Test
     void missingInputIsNamed() {
         assertOneLineNaming(pattern("view"), "RUN_DIR|SCENARIO");
         assertOneLineNaming(pattern("view", dir.resolve("nowhere").toString()), "nowhere", "does not exist");

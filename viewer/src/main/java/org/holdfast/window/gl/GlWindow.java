@@ -23,6 +23,9 @@ import org.lwjgl.system.MemoryStack;
  */
 public final class GlWindow implements AutoCloseable {
 
+    /** Why no window can open when no display is named. */
+    public static final String NO_DISPLAY = "no display to open a window on (DISPLAY is not set)";
+
     private static volatile String lastGlfwError = "";
 
     private final long handle;
@@ -76,12 +79,21 @@ public final class GlWindow implements AutoCloseable {
         return w;
     }
 
+    /** True if the environment names a display (X11 or Wayland); whether it works shows at {@link #open}. */
+    public static boolean displayNamed() {
+        return !blank(System.getenv("DISPLAY")) || !blank(System.getenv("WAYLAND_DISPLAY"));
+    }
+
+    private static boolean blank(String s) {
+        return s == null || s.isBlank();
+    }
+
     private static GLFWErrorCallback startGlfw() throws NoDisplayException {
         String display = System.getenv("DISPLAY");
         String wayland = System.getenv("WAYLAND_DISPLAY");
-        boolean x11 = display != null && !display.isBlank();
-        if (!x11 && (wayland == null || wayland.isBlank())) {
-            throw new NoDisplayException("no display to open a window on (DISPLAY is not set)");
+        boolean x11 = !blank(display);
+        if (!displayNamed()) {
+            throw new NoDisplayException(NO_DISPLAY);
         }
         lastGlfwError = "";
         GLFWErrorCallback cb = GLFWErrorCallback.create(
