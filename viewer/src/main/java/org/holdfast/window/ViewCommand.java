@@ -127,15 +127,15 @@ public final class ViewCommand implements Callable<Integer> {
         if (!Files.exists(input)) {
             return fail("RUN_DIR|SCENARIO: '" + input + "' does not exist");
         }
-        if (!GlWindow.displayNamed()) {
-            return fail(GlWindow.NO_DISPLAY + "; use holdfast render to make pictures without a window");
-        }
         try (FrameSource source = opener.open(input)) {
             ViewState start;
             try {
                 start = startView(source, cam);
             } catch (BadOption e) {
                 return fail(e.getMessage());
+            }
+            if (!GlWindow.displayNamed()) {
+                return fail(GlWindow.NO_DISPLAY + "; use holdfast render to make pictures without a window");
             }
             Controls controls = new Controls(source, start);
             ViewLoop loop = new ViewLoop(source, controls, settings, input.getFileName().toString(), out);
