@@ -79,6 +79,14 @@ public final class ViewCommand implements Callable<Integer> {
             description = "Clock speed in Gyr per second (default: the whole run in 30 s).")
     Double rateGyrPerS;
 
+    @Option(names = "--frame-gyr", paramLabel = "DT",
+            description = "While playing, step the clock DT Gyr per frame instead of following the "
+                    + "wall clock (repeatable rehearsals).")
+    Double frameGyr;
+
+    @Option(names = "--whole-screen", description = "Start filling the screen (W switches back and forth).")
+    boolean wholeScreen;
+
     @Option(names = "--dome", description = "Start in the dome preview instead of the flat view.")
     boolean dome;
 
@@ -178,7 +186,11 @@ public final class ViewCommand implements Callable<Integer> {
             throw new BadOption("--rate: " + rateGyrPerS + " Gyr/s outside " + Clock.MIN_RATE_GYR_PER_S
                     + " to " + Clock.MAX_RATE_GYR_PER_S);
         }
-        return new ViewLoop.Settings(window, frames == null ? 0 : frames, screenshot, big, shotsDir, fpsReport);
+        if (frameGyr != null && !(frameGyr > 0 && Double.isFinite(frameGyr))) {
+            throw new BadOption("--frame-gyr: must be a positive number of Gyr, got " + frameGyr);
+        }
+        return new ViewLoop.Settings(window, frames == null ? 0 : frames, screenshot, big, shotsDir, fpsReport,
+                frameGyr == null ? 0.0 : frameGyr, wholeScreen);
     }
 
     private static FrameSize size(String option, String text) throws BadOption {

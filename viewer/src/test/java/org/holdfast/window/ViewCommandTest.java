@@ -42,6 +42,7 @@ class ViewCommandTest {
         assertOneLineNaming(pattern("view", d, "--large-shot", "0x10"), "--large-shot");
         assertOneLineNaming(pattern("view", d, "--frames", "0"), "--frames");
         assertOneLineNaming(pattern("view", d, "--rate", "0"), "--rate");
+        assertOneLineNaming(pattern("view", d, "--frame-gyr", "-0.1"), "--frame-gyr");
         assertOneLineNaming(pattern("view", d, "--screenshot", dir.resolve("a.jpg").toString()), "--screenshot", ".png");
         assertOneLineNaming(pattern("view", d, "--at-gyr", "12"), "--at-gyr", "12", "0 to 10 Gyr");
         assertOneLineNaming(pattern("view", d, "--at-gyr", "-0.5"), "--at-gyr");

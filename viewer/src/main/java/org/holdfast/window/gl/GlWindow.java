@@ -34,6 +34,8 @@ public final class GlWindow implements AutoCloseable {
     private final int framebuffer;
     private int textureWidth;
     private int textureHeight;
+    /** Window position and size to return to from the whole screen; null while windowed. */
+    private int[] windowedBounds;
 
     private GlWindow(long handle, GLFWErrorCallback errorCallback) {
         this.handle = handle;
@@ -165,6 +167,34 @@ public final class GlWindow implements AutoCloseable {
         int[] h = new int[1];
         glfwGetFramebufferSize(handle, w, h);
         return new int[] {w[0], h[0]};
+    }
+
+    /** True while the window fills the screen. */
+    public boolean wholeScreen() {
+        return windowedBounds != null;
+    }
+
+    /** Fills the primary monitor at its current mode, or goes back to the window it was. */
+    public void toggleWholeScreen() {
+        if (windowedBounds == null) {
+            long monitor = glfwGetPrimaryMonitor();
+            var mode = monitor == 0L ? null : glfwGetVideoMode(monitor);
+            if (mode == null) {
+                return;
+            }
+            int[] x = new int[1];
+            int[] y = new int[1];
+            int[] w = new int[1];
+            int[] h = new int[1];
+            glfwGetWindowPos(handle, x, y);
+            glfwGetWindowSize(handle, w, h);
+            windowedBounds = new int[] {x[0], y[0], w[0], h[0]};
+            glfwSetWindowMonitor(handle, monitor, 0, 0, mode.width(), mode.height(), mode.refreshRate());
+        } else {
+            int[] b = windowedBounds;
+            windowedBounds = null;
+            glfwSetWindowMonitor(handle, 0L, b[0], b[1], b[2], b[3], GLFW_DONT_CARE);
+        }
     }
 
     public void setTitle(String title) {

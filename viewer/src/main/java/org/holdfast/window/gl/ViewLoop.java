@@ -29,9 +29,11 @@ public final class ViewLoop implements InputSink {
      * @param largeShot   size of screenshots taken with the large-shot key
      * @param shotsDir    folder for screenshots taken with keys
      * @param fpsReport   print frame rate and time per frame at the end
+     * @param frameGyr    clock step per frame while playing, Gyr; 0 to follow the wall clock
+     * @param wholeScreen start filling the screen
      */
     public record Settings(FrameSize window, long frameLimit, Path screenshot, FrameSize largeShot,
-                           Path shotsDir, boolean fpsReport) {
+                           Path shotsDir, boolean fpsReport, double frameGyr, boolean wholeScreen) {
     }
 
     /** How the loop ended. */
@@ -65,6 +67,9 @@ public final class ViewLoop implements InputSink {
     public Outcome run() throws NoDisplayException, IOException {
         boolean scripted = settings.frameLimit() > 0;
         window = GlWindow.open(title(), settings.window().width(), settings.window().height(), !scripted, this);
+        if (settings.wholeScreen()) {
+            window.toggleWholeScreen();
+        }
         try {
             return loop();
         } finally {
@@ -90,7 +95,7 @@ public final class ViewLoop implements InputSink {
             long now = System.nanoTime();
             double dt = (now - lastNs) * 1e-9;
             lastNs = now;
-            controls.tick(frames == 0 ? 0.0 : dt);
+            controls.tick(frames == 0 ? 0.0 : clockSeconds(dt));
             int[] fb = window.framebufferSize();
             if (fb[0] <= 0 || fb[1] <= 0) {
                 window.waitEvents(0.1);
@@ -128,10 +133,17 @@ public final class ViewLoop implements InputSink {
         return new Outcome(frames, early, written);
     }
 
+    /** Wall seconds the clock should run for this frame: real, or one fixed clock step. */
+    private double clockSeconds(double wallSeconds) {
+        return settings.frameGyr() > 0 ? settings.frameGyr() / controls.state().clock().rateGyrPerS() : wallSeconds;
+    }
+
     private void handleShotRequests(ViewState view) throws IOException {
         while (!shotRequests.isEmpty()) {
             Request r = shotRequests.poll();
-            if (r == Request.SCREENSHOT) {
+            if (r == Request.WHOLE_SCREEN) {
+                window.toggleWholeScreen();
+            } else if (r == Request.SCREENSHOT) {
                 Path p = readBackTo(Screenshots.nextFreeName(settings.shotsDir()));
                 out.println("saved " + p + " (" + frameWidth + "x" + frameHeight + ")");
             } else if (r == Request.SCREENSHOT_LARGE) {

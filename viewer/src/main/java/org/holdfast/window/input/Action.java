@@ -30,6 +30,7 @@ public enum Action {
     SHOW_CLOCK("clock and scale factor on or off"),
     SHOW_EVENTS("fate-event notes on or off"),
     SHOW_HELP("this list of keys on or off"),
+    WHOLE_SCREEN("fill the screen, or go back to a window"),
     SCREENSHOT("save a PNG at the window's size"),
     SCREENSHOT_LARGE("save a PNG at the large screenshot size"),
     QUIT("close the window");

@@ -49,6 +49,7 @@ public final class Bindings {
             b(GLFW_KEY_6, false, Action.SHOW_EVENTS, "6"),
             b(GLFW_KEY_H, false, Action.SHOW_HELP, "H"),
             b(GLFW_KEY_F1, false, Action.SHOW_HELP, "F1"),
+            b(GLFW_KEY_W, false, Action.WHOLE_SCREEN, "W"),
             b(GLFW_KEY_P, false, Action.SCREENSHOT, "P"),
             b(GLFW_KEY_P, true, Action.SCREENSHOT_LARGE, "Shift+P"),
             b(GLFW_KEY_ESCAPE, false, Action.QUIT, "Esc"),

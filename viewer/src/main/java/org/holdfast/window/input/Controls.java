@@ -66,6 +66,7 @@ public final class Controls {
             case SCREENSHOT -> Request.SCREENSHOT;
             case SCREENSHOT_LARGE -> Request.SCREENSHOT_LARGE;
             case QUIT -> Request.QUIT;
+            case WHOLE_SCREEN -> Request.WHOLE_SCREEN;
             default -> {
                 applyViewAction(action);
                 yield Request.NONE;

@@ -8,6 +8,8 @@ public enum Request {
     SCREENSHOT,
     /** Save a PNG at the large screenshot size, drawn afresh by the frame source. */
     SCREENSHOT_LARGE,
+    /** Fill the screen, or go back to a window. */
+    WHOLE_SCREEN,
     /** Close the window. */
     QUIT
 }

@@ -129,6 +129,50 @@ class WindowTest {
     }
 
     @Test
+    void fixedClockStepMakesPlayingRepeatable() throws Exception {
+        PatternSource source = new PatternSource();
+        Path shot = dir.resolve("played.png");
+        ViewRun.Result r = ViewRun.run(input -> source, "view", dir.toString(), "--frames", "4", "--play",
+                "--at-gyr", "1", "--frame-gyr", "0.5", "--screenshot", shot.toString(), "--size", "96x64");
+        assertEquals(0, r.exitCode(), r.err());
+        // Frame 1 shows the start; each later frame is one step on.
+        assertEquals(2.5, source.lastView().clock().tGyr(), 1e-12);
+        assertTrue(source.lastView().clock().playing());
+        assertEquals(TOLERANCE, FrameCompare.maxChannelDifference(shot,
+                PatternSource.frame(source.lastView(), 96, 64), 96, 64));
+    }
+
+    @Test
+    void wholeScreenKeyFillsTheScreenAndComesBack() throws Exception {
+        ViewLoop[] loop = new ViewLoop[1];
+        int[][] sizes = new int[5][];
+        int[] screen = new int[2];
+        PatternSource source = new PatternSource() {
+            @Override
+            public void draw(ViewState view, int width, int height, int[] argb) {
+                super.draw(view, width, height, argb);
+                sizes[drawCount() - 1] = new int[] {width, height};
+                var mode = glfwGetVideoMode(glfwGetPrimaryMonitor());
+                screen[0] = mode.width();
+                screen[1] = mode.height();
+                if (drawCount() == 1 || drawCount() == 3) {
+                    loop[0].keyPressed(GLFW_KEY_W, 0);
+                }
+            }
+        };
+        ViewLoop.Settings settings = new ViewLoop.Settings(new FrameSize(160, 100), 5, null,
+                new FrameSize(320, 200), dir, false, 0.0, false);
+        loop[0] = new ViewLoop(source, new Controls(source, ViewState.of(Camera.looking(0, 0, 300),
+                Clock.pausedAt(0, 1))), settings, "pattern", new PrintWriter(new StringWriter(), true));
+        loop[0].run();
+        assertEquals(160, sizes[0][0]);
+        assertEquals(screen[0], sizes[2][0], "frame as wide as the screen");
+        assertEquals(screen[1], sizes[2][1], "frame as high as the screen");
+        assertEquals(160, sizes[4][0], "back to the window");
+        assertEquals(100, sizes[4][1]);
+    }
+
+    @Test
     void screenshotKeysWriteTheWindowAndTheLargeSize() throws Exception {
         ViewLoop[] loop = new ViewLoop[1];
         PatternSource source = new PatternSource() {
@@ -148,7 +192,7 @@ class WindowTest {
         ViewState start = ViewState.of(Camera.looking(45, -20, 300), Clock.pausedAt(7.25, 0.1));
         StringWriter out = new StringWriter();
         ViewLoop.Settings settings = new ViewLoop.Settings(new FrameSize(120, 90), 0, null,
-                new FrameSize(300, 200), dir, false);
+                new FrameSize(300, 200), dir, false, 0.0, false);
         loop[0] = new ViewLoop(source, new Controls(source, start), settings, "pattern", new PrintWriter(out, true));
         ViewLoop.Outcome o = loop[0].run();
         assertEquals(2, o.frames(), "Q quits before the third frame");
