@@ -34,6 +34,8 @@ public final class GlWindow implements AutoCloseable {
     private final int framebuffer;
     private int textureWidth;
     private int textureHeight;
+    private final int[] sizeX = new int[1];
+    private final int[] sizeY = new int[1];
     /** Window position and size to return to from the whole screen; null while windowed. */
     private int[] windowedBounds;
 
@@ -161,12 +163,12 @@ public final class GlWindow implements AutoCloseable {
         glfwSetWindowShouldClose(handle, true);
     }
 
-    /** The drawable size in pixels, {width, height}; zeros while minimised. */
-    public int[] framebufferSize() {
-        int[] w = new int[1];
-        int[] h = new int[1];
-        glfwGetFramebufferSize(handle, w, h);
-        return new int[] {w[0], h[0]};
+    /** The drawable size in pixels written into {@code widthHeight}; zeros while minimised. */
+    public int[] framebufferSize(int[] widthHeight) {
+        glfwGetFramebufferSize(handle, sizeX, sizeY);
+        widthHeight[0] = sizeX[0];
+        widthHeight[1] = sizeY[0];
+        return widthHeight;
     }
 
     /** True while the window fills the screen. */

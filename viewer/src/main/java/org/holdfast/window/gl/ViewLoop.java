@@ -52,6 +52,7 @@ public final class ViewLoop implements InputSink {
 
     private GlWindow window;
     private int[] frame = new int[0];
+    private final int[] drawable = new int[2];
     private int frameWidth;
     private int frameHeight;
 
@@ -96,7 +97,7 @@ public final class ViewLoop implements InputSink {
             double dt = (now - lastNs) * 1e-9;
             lastNs = now;
             controls.tick(frames == 0 ? 0.0 : clockSeconds(dt));
-            int[] fb = window.framebufferSize();
+            int[] fb = window.framebufferSize(drawable);
             if (fb[0] <= 0 || fb[1] <= 0) {
                 window.waitEvents(0.1);
                 continue;

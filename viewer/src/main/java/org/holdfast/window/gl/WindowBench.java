@@ -56,7 +56,7 @@ public final class WindowBench implements BenchSuite {
         int h = size.height();
         int[] argb = new int[w * h];
         try (GlWindow window = GlWindow.open("holdfast bench", w, h, false, IGNORE_INPUT)) {
-            int[] fb = window.framebufferSize();
+            int[] fb = window.framebufferSize(new int[2]);
             if (fb[0] != w || fb[1] != h) {
                 throw new NoDisplayException("the display gave a " + fb[0] + "x" + fb[1] + " window, not " + size);
             }
