@@ -63,7 +63,7 @@ public final class ExpansionPlot {
         List<Double> y = new ArrayList<>();
         int n = 600;
         for (int i = 0; i <= n; i++) {
-            double tt = lo + (hi - lo) * i / n;
+            double tt = Math.min(hi, lo + (hi - lo) * i / n);
             double a = t.scaleFactor(tt);
             if (a > 1e6) {
                 break;
