@@ -24,6 +24,8 @@ abstract class Branch implements FirstOrderDifferentialEquations {
     private ContinuousOutputModel out;
     double lo = Double.NaN;
     double hi = Double.NaN;
+    private double yLo;
+    private double yHi;
 
     Branch(Cosmology c) {
         this.c = c;
@@ -78,6 +80,8 @@ abstract class Branch implements FirstOrderDifferentialEquations {
         double a = out.getInitialTime();
         lo = Math.min(a, end);
         hi = Math.max(a, end);
+        yLo = y(lo);
+        yHi = y(hi);
     }
 
     /** y at sigma, from the dense output. */
@@ -93,8 +97,8 @@ abstract class Branch implements FirstOrderDifferentialEquations {
     double solve(double target, double guess) {
         double a = lo;
         double b = hi;
-        double fa = y(a) - target;
-        double fb = y(b) - target;
+        double fa = yLo - target;
+        double fb = yHi - target;
         if (fa == 0) {
             return a;
         }

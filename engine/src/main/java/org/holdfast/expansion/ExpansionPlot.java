@@ -63,7 +63,7 @@ public final class ExpansionPlot {
         List<Double> y = new ArrayList<>();
         int n = 600;
         for (int i = 0; i <= n; i++) {
-            double tt = lo + (hi - lo) * i / n;
+            double tt = Math.min(hi, lo + (hi - lo) * i / n);
             double a = t.scaleFactor(tt);
             if (a > 1e6) {
                 break;
@@ -72,7 +72,9 @@ public final class ExpansionPlot {
             y.add(a);
         }
         XYChart chart = style(new XYChartBuilder().width(WIDTH).height(HEIGHT).title(title)
-                .xAxisTitle("time t [Gyr from today]").yAxisTitle("scale factor a (1 today)").build());
+                .xAxisTitle("time t [Gyr from today]").yAxisTitle("scale factor a (1 today, log scale)").build());
+        chart.getStyler().setYAxisLogarithmic(true);
+        chart.getStyler().setXAxisDecimalPattern("0.#");
         XYSeries s = chart.addSeries("a(t)", x, y);
         s.setLineColor(CURVE);
         s.setLineStyle(new BasicStroke(2.5f));
@@ -94,9 +96,14 @@ public final class ExpansionPlot {
             y.add(de.w(a));
         }
         XYChart chart = style(new XYChartBuilder().width(WIDTH).height(HEIGHT)
-                .title("dark energy: " + de.describe())
+                .title("dark-energy equation of state w(a)")
                 .xAxisTitle("scale factor a (log scale)").yAxisTitle("equation of state w").build());
         chart.getStyler().setXAxisLogarithmic(true);
+        double wMin = y.stream().mapToDouble(Double::doubleValue).min().orElse(-1);
+        double wMax = y.stream().mapToDouble(Double::doubleValue).max().orElse(-1);
+        chart.getStyler().setYAxisMin(wMin - 0.1);
+        chart.getStyler().setYAxisMax(wMax + 0.1);
+        chart.getStyler().setYAxisDecimalPattern("0.00");
         XYSeries s = chart.addSeries("w(a)", x, y);
         s.setLineColor(EOS);
         s.setLineStyle(new BasicStroke(2.5f));

@@ -12,7 +12,9 @@ import org.apache.commons.math3.ode.events.EventHandler;
  * integrated as a quadrature on each branch ({@link Branch}) and the table nodes are laid out
  * uniformly in the segment variables of {@link Segment}. Every interval is checked at its
  * midpoint against the quadrature; where ln a, H or k is off by more than 2e-11 (relative),
- * the segment's spacing is halved and it is built again.
+ * the segment's spacing is halved and it is built again, as long as halving still gains at
+ * least a factor 8 (a w(a) table whose spline has kinks converges more slowly; it then keeps
+ * the spacing where the gain stalled).
  */
 final class TableBuilder {
 
@@ -34,7 +36,7 @@ final class TableBuilder {
     static final double LN_RHO_CAP = 500;
     static final double SCAN_STEP = 0.05;
     static final double TOL = 2e-11;
-    static final int MAX_INTERVALS = 1 << 19;
+    static final int MAX_INTERVALS = 1 << 18;
 
     private final Cosmology c;
     private final Options options;
@@ -235,6 +237,7 @@ final class TableBuilder {
 
     private Segment segment(int kind, Branch b, double u0, double u1, double step) {
         int n = (int) Math.min(MAX_INTERVALS, Math.max(2, Math.ceil((u1 - u0) / step)));
+        double previous = Double.POSITIVE_INFINITY;
         while (true) {
             Segment seg = new Segment(kind, u0, u1, n);
             double[] nodes = new double[(n + 1) * Segment.NODE];
@@ -245,9 +248,17 @@ final class TableBuilder {
                 guess = sigma[i];
             }
             seg.fill(nodes);
-            if (!options.refine() || 2L * n > MAX_INTERVALS || worstMidpointError(seg, b, sigma) <= TOL) {
+            if (!options.refine() || 2L * n > MAX_INTERVALS) {
                 return seg;
             }
+            double err = worstMidpointError(seg, b, sigma);
+            // Stop when the error is small, or when halving gains less than third order: then the
+            // input itself is not smooth (a w(a) table's spline has kinks in its derivatives at
+            // the knots and ends) and more nodes would buy little.
+            if (err <= TOL || err > previous / 8) {
+                return seg;
+            }
+            previous = err;
             n *= 2;
         }
     }
