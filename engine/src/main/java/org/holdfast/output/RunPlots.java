@@ -36,7 +36,7 @@ public final class RunPlots {
     }
 
     static void distances(Path file, RunRecorder rec, List<RunEvent> events, String title) {
-        XYChart c = Charts.lines(title + ": distance from the centre of mass", "time from today [Gyr]",
+        XYChart c = Charts.lines(title + ": distance from the group centre", "time from today [Gyr]",
                 "distance [kpc]", W, H);
         double[] t = rec.times();
         int colour = 0;
@@ -52,7 +52,7 @@ public final class RunPlots {
         }
         double[] zg = rec.zeroGravityKpc();
         if (hasFinite(zg)) {
-            Charts.guide(c, "zero-gravity radius", t, capped(zg, 3 * Math.max(max, 1)));
+            Charts.guide(c, "zero-gravity radius of the main group", t, capped(zg, 5 * Math.max(max, 1)));
         }
         int row = 0;
         for (RunEvent ev : events) {
@@ -80,7 +80,7 @@ public final class RunPlots {
     }
 
     static void hubble(Path file, RunRecorder rec, String title) {
-        XYChart c = Charts.lines(title + ": local Hubble diagram", "distance from the centre of mass [kpc]",
+        XYChart c = Charts.lines(title + ": local Hubble diagram", "distance from the group centre [kpc]",
                 "radial velocity [km/s]", W, H);
         RunRecorder.HubbleDiagram a = rec.startDiagram();
         RunRecorder.HubbleDiagram b = rec.endDiagram();
