@@ -21,10 +21,13 @@ import picocli.CommandLine.Spec;
             "who stays bound, merges, escapes or is ripped away, sweep parameters, film it.",
             "",
             "Example:",
-            "  holdfast expansion scenarios/lambda-today.toml"
+            "  holdfast expansion scenarios/lambda-steady.toml"
         },
         subcommands = {
             CommandLine.HelpCommand.class,
+            ExpansionCommand.class,
+            EvolveCommand.class,
+            ValidateCommand.class,
             BenchCommand.class
         })
 public final class Holdfast implements Runnable {
@@ -47,12 +50,23 @@ public final class Holdfast implements Runnable {
     public static CommandLine commandLine() {
         CommandLine cl = new CommandLine(new Holdfast());
         cl.setExecutionExceptionHandler(Holdfast::handleFailure);
+        cl.setParameterExceptionHandler(Holdfast::handleBadOption);
         cl.setCaseInsensitiveEnumValuesAllowed(true);
         return cl;
     }
 
     public static void main(String[] args) {
         System.exit(commandLine().execute(args));
+    }
+
+    /** A malformed command line: one line naming the option, a pointer to the help, exit code 2. */
+    static int handleBadOption(CommandLine.ParameterException e, String[] args) {
+        CommandLine cl = e.getCommandLine();
+        PrintWriter err = cl.getErr();
+        String name = cl.getCommandSpec().qualifiedName();
+        err.println(name + ": " + e.getMessage() + " (see '" + name + " --help')");
+        err.flush();
+        return EXIT_BAD_INPUT;
     }
 
     /**

@@ -73,4 +73,9 @@ public interface RunView {
 
     /** The initial centre-of-mass velocity in the user's frame (kpc/Gyr). */
     double[] frameVelocity();
+
+    /** Events recorded by the simulation itself so far (mergers), in time order. */
+    default java.util.List<RunEvent> events() {
+        return java.util.List.of();
+    }
 }

@@ -96,6 +96,10 @@ public final class Node {
 
     /** A required number. */
     public double number(String key) {
+        return readNumber(key, false);
+    }
+
+    private double readNumber(String key, boolean mustBePositive) {
         String o = overrides.take(keyPath(key));
         if (o != null) {
             return parseOverrideNumber(key, o);
@@ -104,7 +108,7 @@ public final class Node {
         if (raw == null) {
             throw error(null, "missing required key '" + keyPath(key) + "'");
         }
-        return finite(key, numbers.read(this, key, raw));
+        return finite(key, mustBePositive ? numbers.readPositive(this, key, raw) : numbers.read(this, key, raw));
     }
 
     /** An optional number. */
@@ -114,7 +118,7 @@ public final class Node {
 
     /** A required number that must be strictly positive. */
     public double positive(String key) {
-        double v = number(key);
+        double v = readNumber(key, true);
         if (!(v > 0)) {
             throw error(key, "must be > 0 (got " + fmt(v) + ")");
         }
@@ -241,7 +245,7 @@ public final class Node {
         for (int i = 0; i < length; i++) {
             String ck = key + "." + i;
             String o = overrides.take(keyPath(ck));
-            out[i] = o != null ? parseOverrideNumber(ck, o) : finite(key, numbers.read(this, key, arr.get(i)));
+            out[i] = o != null ? parseOverrideNumber(ck, o) : finite(key, numbers.readComponent(this, key, i, arr.get(i)));
         }
         return out;
     }

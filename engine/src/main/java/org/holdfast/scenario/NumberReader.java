@@ -17,6 +17,24 @@ public interface NumberReader {
      */
     double read(Node node, String key, Object raw);
 
+    /**
+     * Reads a key the caller requires to be strictly positive ({@link Node#positive}), so that
+     * a reader of distributions can reject one that puts appreciable weight at or below zero.
+     * The caller still checks the value returned.
+     */
+    default double readPositive(Node node, String key, Object raw) {
+        return read(node, key, raw);
+    }
+
+    /**
+     * Reads component {@code index} of the vector {@code key} ({@link Node#vector}), so that a
+     * reader drawing random numbers can tell the components apart (its key path is
+     * {@code key.index}, as overrides spell it).
+     */
+    default double readComponent(Node node, String key, int index, Object raw) {
+        return read(node, key, raw);
+    }
+
     /** The plain reader: integers and floats only. */
     NumberReader PLAIN = (node, key, raw) -> {
         if (raw instanceof Double d) {

@@ -1,6 +1,8 @@
 package org.holdfast.viewer;
 
 import org.holdfast.cli.Holdfast;
+import org.holdfast.window.FrameSources;
+import org.holdfast.window.ViewCommand;
 
 import picocli.CommandLine;
 
@@ -15,8 +17,24 @@ public final class HoldfastFull {
 
     /** The full command line. */
     public static CommandLine commandLine() {
+        return commandLine(FrameSources::open);
+    }
+
+    /** The full command line, with {@code holdfast view} taking its frames from {@code sources}. */
+    public static CommandLine commandLine(FrameSources.SourceOpener sources) {
         CommandLine cl = Holdfast.commandLine();
+        cl.addSubcommand("view", new ViewCommand(sources));
+        cl.setParameterExceptionHandler(HoldfastFull::oneLine);
         return cl;
+    }
+
+    /** A malformed command line: one line naming the command and the option, exit code 2. */
+    private static int oneLine(CommandLine.ParameterException e, String[] args) {
+        CommandLine where = e.getCommandLine();
+        String name = where.getCommandSpec().qualifiedName(" ");
+        where.getErr().println(name + ": " + e.getMessage() + " (see " + name + " --help)");
+        where.getErr().flush();
+        return Holdfast.EXIT_BAD_INPUT;
     }
 
     public static void main(String[] args) {

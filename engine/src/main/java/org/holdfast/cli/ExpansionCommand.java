@@ -1,0 +1,252 @@
+package org.holdfast.cli;
+
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.OptionalDouble;
+import java.util.concurrent.Callable;
+
+import org.holdfast.expansion.ConstantW;
+import org.holdfast.expansion.CosmologicalConstant;
+import org.holdfast.expansion.Cosmology;
+import org.holdfast.expansion.CosmologyReader;
+import org.holdfast.expansion.DarkEnergyModel;
+import org.holdfast.expansion.ExpansionPlot;
+import org.holdfast.expansion.ExpansionRangeException;
+import org.holdfast.expansion.ExpansionTable;
+import org.holdfast.expansion.InvalidCosmologyException;
+import org.holdfast.expansion.W0WaDarkEnergy;
+import org.holdfast.expansion.WTableCsv;
+import org.holdfast.scenario.Node;
+import org.holdfast.scenario.Overrides;
+import org.holdfast.scenario.ScenarioException;
+import org.holdfast.scenario.ScenarioFile;
+import org.holdfast.units.Units;
+
+import com.fasterxml.jackson.databind.ObjectMapper;
+import com.fasterxml.jackson.databind.SerializationFeature;
+
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
+
+/** {@code holdfast expansion}: the expansion history of one cosmology, as a table, JSON or a plot. */
+@Command(name = "expansion",
+        mixinStandardHelpOptions = true,
+        description = {
+            "Solves the expansion of the universe for one cosmology and prints its landmarks (age,",
+            "big rip or crunch, Hubble time, dark-energy density, q0, onset of acceleration) and",
+            "a, H and the dark-energy term at a few times.",
+            "",
+            "The cosmology comes from the [cosmology] table of a scenario file, or from options.",
+            "",
+            "Examples:",
+            "  holdfast expansion scenarios/lambda-today.toml",
+            "  holdfast expansion --h0 70 --omega-m 0.3 --w0 -1.5 --at 0,10,20 --json",
+            "  holdfast expansion scenarios/phantom-tide.toml --plot phantom.png"
+        })
+public final class ExpansionCommand implements Callable<Integer> {
+
+    private static final double[] DEFAULT_TIMES = {0, 1, 2, 5, 10, 20, 50, 100};
+
+    @Parameters(arity = "0..1", paramLabel = "SCENARIO", description = "A scenario file with a [cosmology] table.")
+    Path scenario;
+
+    @Option(names = "--h0", paramLabel = "KM_S_MPC", description = "Hubble constant in km/s/Mpc.")
+    Double h0;
+
+    @Option(names = "--omega-m", paramLabel = "X", description = "Matter density parameter today.")
+    Double omegaM;
+
+    @Option(names = "--omega-r", paramLabel = "X|cmb",
+            description = "Radiation density today: a number, or 'cmb' (T = 2.7255 K, N_eff = 3.046). Default 0.")
+    String omegaR;
+
+    @Option(names = "--omega-k", paramLabel = "X", description = "Curvature parameter (default 0: flat).")
+    Double omegaK;
+
+    @Option(names = "--w0", paramLabel = "W", description = "Dark-energy w today (default -1).")
+    Double w0;
+
+    @Option(names = "--wa", paramLabel = "W", description = "Dark-energy wa in w = w0 + wa (1 - a) (default 0).")
+    Double wa;
+
+    @Option(names = "--w-table", paramLabel = "FILE.csv", description = "w(a) table with columns a,w.")
+    Path wTable;
+
+    @Option(names = "--set", paramLabel = "KEY=VALUE", description = "Override a scenario value, e.g. cosmology.h0=68.")
+    List<String> sets = new ArrayList<>();
+
+    @Option(names = "--at", paramLabel = "T1,T2,...", split = ",",
+            description = "Sample times in Gyr from today (negative: the past).")
+    List<Double> at;
+
+    @Option(names = "--horizon", paramLabel = "GYR", defaultValue = "1000",
+            description = "How far into the future the table reaches, Gyr (default ${DEFAULT-VALUE}).")
+    double horizonGyr;
+
+    @Option(names = "--json", description = "Print one JSON object instead of a table.")
+    boolean json;
+
+    @Option(names = "--plot", paramLabel = "FILE.png", description = "Also draw a(t) and w(a) into a PNG.")
+    Path plot;
+
+    @Spec
+    CommandSpec spec;
+
+    @Override
+    public Integer call() throws IOException {
+        if (!(horizonGyr > 0) || Double.isInfinite(horizonGyr)) {
+            throw new ScenarioException("--horizon", null, "must be a positive number of Gyr");
+        }
+        if (plot != null) {
+            checkPlotPath();
+        }
+        String title;
+        ExpansionTable table;
+        if (scenario != null) {
+            rejectOptionsWithScenario();
+            Overrides overrides = Overrides.parse(sets);
+            Node root = ScenarioFile.open(scenario, overrides);
+            title = root.string("name", scenario.getFileName().toString());
+            table = CosmologyReader.solve(root.requireTable("cosmology"), horizonGyr);
+            overrides.checkAllUsed();
+        } else {
+            if (!sets.isEmpty()) {
+                throw new ScenarioException("--set", null, "needs a scenario file");
+            }
+            table = solve(fromOptions());
+            title = "holdfast expansion";
+        }
+        List<double[]> samples = samples(table);
+        PrintWriter out = spec.commandLine().getOut();
+        if (json) {
+            out.println(new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT)
+                    .writeValueAsString(ExpansionReport.json(table, samples)));
+        } else {
+            ExpansionReport.text(out, title, table, samples);
+        }
+        out.flush();
+        if (plot != null) {
+            ExpansionPlot.write(table, title, plot);
+        }
+        return 0;
+    }
+
+    private void checkPlotPath() {
+        if (!plot.getFileName().toString().toLowerCase(Locale.ROOT).endsWith(".png")) {
+            throw new ScenarioException("--plot", null, "expected a file name ending in .png, got '" + plot + "'");
+        }
+        Path dir = plot.toAbsolutePath().getParent();
+        if (dir == null || !Files.isDirectory(dir)) {
+            throw new ScenarioException("--plot", null, "no such folder: " + dir);
+        }
+    }
+
+    private void rejectOptionsWithScenario() {
+        if (h0 != null || omegaM != null || omegaR != null || omegaK != null || w0 != null || wa != null
+                || wTable != null) {
+            throw new ScenarioException("--h0/--omega-m/...", null,
+                    "give either a scenario file or cosmology options, not both (use --set cosmology.KEY=VALUE)");
+        }
+    }
+
+    private Cosmology fromOptions() {
+        if (h0 == null || omegaM == null) {
+            throw new ScenarioException(h0 == null ? "--h0" : "--omega-m", null,
+                    "missing: give a scenario file, or at least --h0 and --omega-m");
+        }
+        DarkEnergyModel model;
+        if (wTable != null) {
+            if (w0 != null || wa != null) {
+                throw new ScenarioException("--w-table", null, "give either --w-table or --w0/--wa, not both");
+            }
+            if (!Files.isRegularFile(wTable)) {
+                throw new ScenarioException("--w-table", null, "no such file: " + wTable);
+            }
+            model = WTableCsv.read(wTable);
+        } else {
+            double w = w0 == null ? -1 : w0;
+            double a = wa == null ? 0 : wa;
+            model = a == 0 ? (w == -1 ? new CosmologicalConstant() : new ConstantW(w)) : new W0WaDarkEnergy(w, a);
+        }
+        double r = 0;
+        if (omegaR != null) {
+            if (omegaR.equals("cmb")) {
+                r = h0 > 0 ? Cosmology.radiationFromCmb(h0, Cosmology.T_CMB_K, Cosmology.N_EFF) : 0;
+            } else {
+                try {
+                    r = Double.parseDouble(omegaR);
+                } catch (NumberFormatException e) {
+                    throw new ScenarioException("--omega-r", null, "expected a number or 'cmb', got '" + omegaR + "'");
+                }
+            }
+        }
+        try {
+            return new Cosmology(h0, omegaM, r, omegaK == null ? 0 : omegaK, model);
+        } catch (InvalidCosmologyException e) {
+            throw new ScenarioException(option(e.parameter()), null, e.getMessage());
+        }
+    }
+
+    private ExpansionTable solve(Cosmology c) {
+        try {
+            return c.solve(horizonGyr);
+        } catch (InvalidCosmologyException e) {
+            throw new ScenarioException(option(e.parameter()), null, e.getMessage());
+        }
+    }
+
+    private static String option(String parameter) {
+        if (parameter == null || parameter.equals("cosmology")) {
+            return "cosmology";
+        }
+        return "--" + parameter.replace('_', '-');
+    }
+
+    /** Rows of t, a, H [km/s/Mpc], k [1/Gyr^2], rho_de [kg/m^3], w. */
+    private List<double[]> samples(ExpansionTable t) {
+        List<double[]> rows = new ArrayList<>();
+        if (at != null) {
+            for (double tt : at) {
+                if (!Double.isFinite(tt)) {
+                    throw new ScenarioException("--at", null, "times must be finite numbers of Gyr");
+                }
+                try {
+                    rows.add(row(t, tt));
+                } catch (ExpansionRangeException e) {
+                    throw e.asInputError("--at", null);
+                }
+            }
+            return rows;
+        }
+        for (double tt : DEFAULT_TIMES) {
+            if (tt <= t.latestGyr()) {
+                rows.add(row(t, tt));
+            }
+        }
+        return rows;
+    }
+
+    private static double[] row(ExpansionTable t, double tt) {
+        return new double[] {tt, t.scaleFactor(tt), Units.hubbleToKmsPerMpc(t.hubbleRate(tt)),
+            t.darkEnergyAcceleration(tt), t.darkEnergyDensityKgM3(tt), t.equationOfState(tt)};
+    }
+
+    /** The JSON keys of one optional landmark. */
+    static Object orNull(OptionalDouble v) {
+        return v.isPresent() ? v.getAsDouble() : null;
+    }
+
+    static Map<String, Object> map() {
+        return new LinkedHashMap<>();
+    }
+}

@@ -1,0 +1,83 @@
+package org.holdfast.fates;
+
+import java.util.List;
+import java.util.Locale;
+
+import org.holdfast.fates.FateTracker.Verdict;
+import org.holdfast.run.RunEvent;
+
+/**
+ * The fates of a run in plain words, as a presenter could read them out: a table of members
+ * and a timeline of events.
+ */
+public final class FateReport {
+
+    private FateReport() {
+    }
+
+    /** "in 4.2 billion years", "1.3 billion years ago", "now", or Myr for short spans. */
+    public static String when(double tGyr) {
+        double a = Math.abs(tGyr);
+        String span;
+        if (a < 1e-6) {
+            return "now";
+        } else if (a < 1) {
+            span = String.format(Locale.ROOT, "%.0f million years", a * 1e3);
+        } else {
+            span = String.format(Locale.ROOT, "%.1f billion years", a);
+        }
+        return tGyr > 0 ? "in " + span : span + " ago";
+    }
+
+    /** The fate table: one line per member. */
+    public static String table(List<MemberFate> fates) {
+        int width = 4;
+        for (MemberFate f : fates) {
+            width = Math.max(width, f.name().length());
+        }
+        StringBuilder sb = new StringBuilder();
+        for (MemberFate f : fates) {
+            sb.append(String.format(Locale.ROOT, "  %-" + width + "s  %s%n", f.name(), sentence(f)));
+        }
+        return sb.toString();
+    }
+
+    /** What happened to one member, in words. */
+    public static String sentence(MemberFate f) {
+        return switch (f.fate()) {
+            case BOUND -> "stays bound to the group";
+            case MERGED -> "merges into " + f.with() + " " + when(f.atGyr());
+            case ESCAPED -> "escapes the group " + when(f.atGyr());
+            case RIPPED -> "is torn away by dark energy " + when(f.atGyr());
+        };
+    }
+
+    /** The verdict in words. */
+    public static String verdict(Verdict v, double boundUntilGyr) {
+        return switch (v) {
+            case BOUND -> "The group holds together.";
+            case PARTLY_BOUND -> "Part of the group holds together; the members listed above as leaving do not.";
+            case DISSOLVED -> "The group comes apart"
+                    + (Double.isNaN(boundUntilGyr) ? "." : ": its last bound pair separates " + when(boundUntilGyr) + ".");
+        };
+    }
+
+    /** The timeline of events, one line each. */
+    public static String timeline(List<RunEvent> events) {
+        if (events.isEmpty()) {
+            return "  nothing happens: no mergers, no escapes, no member torn away\n";
+        }
+        StringBuilder sb = new StringBuilder();
+        for (RunEvent e : events) {
+            String who = e.members().isEmpty() ? "" : e.members().get(0);
+            String what = switch (e.kind()) {
+                case "merged" -> String.join(" and ", e.members()) + " merge";
+                case "escaped" -> who + " escapes";
+                case "ripped" -> who + " is torn away by dark energy";
+                default -> e.kind() + ": " + String.join(", ", e.members());
+            };
+            sb.append(String.format(Locale.ROOT, "  %-26s %s%n", when(e.tGyr()), what));
+        }
+        return sb.toString();
+    }
+}

@@ -1,0 +1,65 @@
+package org.holdfast.observe;
+
+import org.holdfast.scenario.Node;
+
+/**
+ * Reads the {@code [observer]} table:
+ * <pre>
+ * [observer]
+ * galaxy = "Ossel"                       # the member the observer lives in (required)
+ * distance_to_centre_kpc = 8.122         # default: GRAVITY Collaboration 2018
+ * height_kpc = 0.0208                    # default: Bennett and Bovy 2019
+ * velocity_kms = [12.9, 245.6, 7.78]     # U, V, W; default: Drimmel and Poggio 2018
+ * </pre>
+ * Any of the numbers may be uncertain when the scenario is opened with an uncertain reader.
+ */
+public final class ObserverReader {
+
+    /** Keys of the table. */
+    public static final String GALAXY = "galaxy";
+    public static final String DISTANCE = "distance_to_centre_kpc";
+    public static final String HEIGHT = "height_kpc";
+    public static final String VELOCITY = "velocity_kms";
+
+    private ObserverReader() {
+    }
+
+    /**
+     * The observer for a scenario that has observed members: reads {@code [observer]} from
+     * the root table.
+     *
+     * @param root the scenario's root table
+     * @param observed the first member's {@code observed} table, named in the error if the
+     *     scenario has no {@code [observer]}
+     */
+    public static Observer forObserved(Node root, Node observed) {
+        Node table = root.table("observer");
+        if (table == null) {
+            throw observed.error(null, "a member given by observation needs an [observer] table"
+                    + " naming the home galaxy (galaxy = \"NAME\")");
+        }
+        return read(table);
+    }
+
+    /**
+     * @param observer the {@code [observer]} table
+     * @throws org.holdfast.scenario.ScenarioException naming file, line and key for an
+     *     unknown key, a missing home galaxy, R0 <= 0, or |height| >= R0
+     */
+    public static Observer read(Node observer) {
+        observer.allowOnly(GALAXY, DISTANCE, HEIGHT, VELOCITY);
+        String home = observer.string(GALAXY);
+        if (home.isBlank()) {
+            throw observer.error(GALAXY, "must name the member the observer lives in");
+        }
+        double r0 = observer.positive(DISTANCE, Observer.DEFAULT_DISTANCE_TO_CENTRE_KPC);
+        double h = observer.number(HEIGHT, Observer.DEFAULT_HEIGHT_KPC);
+        if (!(Math.abs(h) < r0)) {
+            throw observer.error(HEIGHT, "must be smaller in size than " + DISTANCE + " ("
+                    + r0 + " kpc), got " + h);
+        }
+        double[] v = observer.has(VELOCITY) ? observer.vector(VELOCITY, 3)
+                : new double[] {Observer.DEFAULT_U_KMS, Observer.DEFAULT_V_KMS, Observer.DEFAULT_W_KMS};
+        return new Observer(home, r0, h, v[0], v[1], v[2]);
+    }
+}

@@ -1,0 +1,98 @@
+package org.holdfast.output;
+
+import java.awt.BasicStroke;
+import java.awt.Font;
+import java.io.IOException;
+import java.io.UncheckedIOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.nio.file.StandardCopyOption;
+
+import org.knowm.xchart.BitmapEncoder;
+import org.knowm.xchart.BitmapEncoder.BitmapFormat;
+import org.knowm.xchart.XYChart;
+import org.knowm.xchart.XYChartBuilder;
+import org.knowm.xchart.XYSeries;
+import org.knowm.xchart.style.Styler.LegendPosition;
+import org.knowm.xchart.style.markers.SeriesMarkers;
+
+/**
+ * Charts in holdfast's own look (XChart, headless): paper background, ink text, light grid,
+ * the {@link Palette} for series. Every chart the project draws starts here.
+ */
+public final class Charts {
+
+    private static final Font TITLE = new Font(Font.SANS_SERIF, Font.BOLD, 17);
+    private static final Font AXIS = new Font(Font.SANS_SERIF, Font.PLAIN, 14);
+    private static final Font TICKS = new Font(Font.SANS_SERIF, Font.PLAIN, 12);
+
+    private Charts() {
+    }
+
+    /** A new line chart with labelled axes (units in the titles). */
+    public static XYChart lines(String title, String xTitle, String yTitle, int width, int height) {
+        XYChart chart = new XYChartBuilder().width(width).height(height).title(title)
+                .xAxisTitle(xTitle).yAxisTitle(yTitle).build();
+        var s = chart.getStyler();
+        s.setChartBackgroundColor(Palette.PAPER);
+        s.setPlotBackgroundColor(Palette.PAPER);
+        s.setPlotBorderVisible(false);
+        s.setPlotGridLinesColor(Palette.GRID);
+        s.setChartFontColor(Palette.INK);
+        s.setAxisTickLabelsColor(Palette.INK);
+        s.setChartTitleFont(TITLE);
+        s.setAxisTitleFont(AXIS);
+        s.setAxisTickLabelsFont(TICKS);
+        s.setLegendFont(TICKS);
+        s.setLegendBackgroundColor(Palette.PAPER);
+        s.setLegendBorderColor(Palette.GRID);
+        s.setLegendPosition(LegendPosition.OutsideE);
+        s.setMarkerSize(0);
+        s.setAntiAlias(true);
+        s.setChartTitleBoxVisible(false);
+        return chart;
+    }
+
+    /** Adds a solid line in member colour i. */
+    public static XYSeries line(XYChart chart, String name, double[] x, double[] y, int colour) {
+        XYSeries s = chart.addSeries(name, x, y);
+        s.setLineColor(Palette.member(colour));
+        s.setLineStyle(new BasicStroke(2.2f));
+        s.setMarker(SeriesMarkers.NONE);
+        return s;
+    }
+
+    /** Adds a dashed grey guide line. */
+    public static XYSeries guide(XYChart chart, String name, double[] x, double[] y) {
+        XYSeries s = chart.addSeries(name, x, y);
+        s.setLineColor(Palette.GUIDE);
+        s.setLineStyle(new BasicStroke(1.6f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_MITER, 10f,
+                new float[] {7f, 5f}, 0f));
+        s.setMarker(SeriesMarkers.NONE);
+        return s;
+    }
+
+    /** Adds points (no line) in member colour i. */
+    public static XYSeries points(XYChart chart, String name, double[] x, double[] y, int colour, int size) {
+        XYSeries s = chart.addSeries(name, x, y);
+        s.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Scatter);
+        s.setMarkerColor(Palette.member(colour));
+        s.setMarker(SeriesMarkers.CIRCLE);
+        chart.getStyler().setMarkerSize(size);
+        return s;
+    }
+
+    /** Writes the chart as PNG, to a temporary name first. */
+    public static void savePng(XYChart chart, Path file) {
+        try {
+            Path dir = file.toAbsolutePath().getParent();
+            Files.createDirectories(dir);
+            String stem = file.getFileName().toString().replaceFirst("\\.png$", "");
+            Path tmp = dir.resolve(stem + ".part");
+            BitmapEncoder.saveBitmap(chart, tmp.toString(), BitmapFormat.PNG);
+            Files.move(dir.resolve(stem + ".part.png"), file, StandardCopyOption.REPLACE_EXISTING);
+        } catch (IOException e) {
+            throw new UncheckedIOException("cannot write " + file, e);
+        }
+    }
+}

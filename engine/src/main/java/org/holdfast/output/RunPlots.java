@@ -1,0 +1,162 @@
+package org.holdfast.output;
+
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Map;
+
+import org.holdfast.run.RunEvent;
+import org.knowm.xchart.AnnotationLine;
+import org.knowm.xchart.AnnotationText;
+import org.knowm.xchart.XYChart;
+
+/**
+ * The pictures of a run, written into its folder: members' distances with the zero-gravity
+ * radius and the events, the energy-budget residual, and the local Hubble diagram at the start
+ * and the end.
+ */
+public final class RunPlots {
+
+    /** File names inside a run folder. */
+    public static final String DISTANCES = "distances.png";
+    public static final String ENERGY = "energy.png";
+    public static final String HUBBLE = "hubble.png";
+
+    private static final int W = 1100;
+    private static final int H = 650;
+
+    private RunPlots() {
+    }
+
+    /** Writes all three pictures. */
+    public static void write(Path runDir, RunRecorder rec, List<RunEvent> events, String title) {
+        distances(runDir.resolve(DISTANCES), rec, events, title);
+        energy(runDir.resolve(ENERGY), rec, title);
+        hubble(runDir.resolve(HUBBLE), rec, title);
+    }
+
+    static void distances(Path file, RunRecorder rec, List<RunEvent> events, String title) {
+        XYChart c = Charts.lines(title + ": distance from the centre of mass", "time from today [Gyr]",
+                "distance [kpc]", W, H);
+        double[] t = rec.times();
+        int colour = 0;
+        double max = 0;
+        for (Map.Entry<String, double[]> e : rec.distancesKpc().entrySet()) {
+            double[] d = e.getValue();
+            Charts.line(c, e.getKey(), t, d, colour++);
+            for (double v : d) {
+                if (v > max) {
+                    max = v;
+                }
+            }
+        }
+        double[] zg = rec.zeroGravityKpc();
+        if (hasFinite(zg)) {
+            Charts.guide(c, "zero-gravity radius", t, capped(zg, 3 * Math.max(max, 1)));
+        }
+        int row = 0;
+        for (RunEvent ev : events) {
+            c.addAnnotation(new AnnotationLine(ev.tGyr(), true, false));
+            // Stack the labels downward so that events close in time stay readable.
+            double y = max * (0.97 - 0.05 * (row++ % 12));
+            c.addAnnotation(new AnnotationText(ev.kind() + ": " + String.join(", ", ev.members()), ev.tGyr(), y, false));
+        }
+        Charts.savePng(c, file);
+    }
+
+    static void energy(Path file, RunRecorder rec, String title) {
+        XYChart c = Charts.lines(title + ": energy budget", "time from today [Gyr]",
+                "relative residual of the energy budget", W, H);
+        double[] r = rec.residuals();
+        double[] t = rec.times();
+        List<double[]> kept = positive(t, r);
+        if (kept.get(0).length >= 2) {
+            c.getStyler().setYAxisLogarithmic(true);
+            Charts.line(c, "|residual|", kept.get(0), kept.get(1), 0);
+        } else {
+            Charts.line(c, "residual", t, r, 0);
+        }
+        Charts.savePng(c, file);
+    }
+
+    static void hubble(Path file, RunRecorder rec, String title) {
+        XYChart c = Charts.lines(title + ": local Hubble diagram", "distance from the centre of mass [kpc]",
+                "radial velocity [km/s]", W, H);
+        RunRecorder.HubbleDiagram a = rec.startDiagram();
+        RunRecorder.HubbleDiagram b = rec.endDiagram();
+        String ta = String.format(java.util.Locale.ROOT, "t = %.1f Gyr", a.tGyr());
+        String tb = String.format(java.util.Locale.ROOT, "t = %.1f Gyr", b.tGyr());
+        if (a.flowR().length > 0) {
+            Charts.points(c, "flow, " + ta, a.flowR(), a.flowVr(), 5, 3);
+            Charts.points(c, "flow, " + tb, b.flowR(), b.flowVr(), 1, 3);
+        }
+        Charts.points(c, "members, " + ta, a.memberR(), a.memberVr(), 0, 5);
+        Charts.points(c, "members, " + tb, b.memberR(), b.memberVr(), 4, 5);
+        double r0 = zeroVelocityRadius(a.flowR(), a.flowVr());
+        if (!Double.isNaN(r0)) {
+            c.addAnnotation(new AnnotationLine(r0, true, false));
+            c.addAnnotation(new AnnotationText("zero-velocity radius (" + ta + ")", r0, 0, false));
+        }
+        c.addAnnotation(new AnnotationLine(0, false, false));
+        Charts.savePng(c, file);
+    }
+
+    /**
+     * The radius where the flow's radial velocity changes sign: the smallest distance beyond
+     * which every flow tracer recedes, from sorted samples (common practice: the turnaround
+     * radius read off a Hubble diagram). NaN when there is no infall or no recession.
+     */
+    static double zeroVelocityRadius(double[] r, double[] vr) {
+        if (r.length == 0) {
+            return Double.NaN;
+        }
+        double lastInfall = Double.NaN;
+        for (int i = 0; i < r.length; i++) {
+            if (vr[i] < 0 && !(r[i] <= lastInfall)) {
+                lastInfall = r[i];
+            }
+        }
+        if (Double.isNaN(lastInfall)) {
+            return Double.NaN;
+        }
+        double firstBeyond = Double.POSITIVE_INFINITY;
+        for (int i = 0; i < r.length; i++) {
+            if (r[i] > lastInfall && r[i] < firstBeyond) {
+                firstBeyond = r[i];
+            }
+        }
+        return Double.isInfinite(firstBeyond) ? Double.NaN : 0.5 * (lastInfall + firstBeyond);
+    }
+
+    private static boolean hasFinite(double[] a) {
+        for (double v : a) {
+            if (Double.isFinite(v)) {
+                return true;
+            }
+        }
+        return false;
+    }
+
+    private static double[] capped(double[] a, double cap) {
+        double[] out = a.clone();
+        for (int i = 0; i < out.length; i++) {
+            if (out[i] > cap) {
+                out[i] = Double.NaN;
+            }
+        }
+        return out;
+    }
+
+    private static List<double[]> positive(double[] t, double[] r) {
+        List<Double> tt = new ArrayList<>();
+        List<Double> rr = new ArrayList<>();
+        for (int i = 0; i < r.length; i++) {
+            if (r[i] > 0 && Double.isFinite(r[i])) {
+                tt.add(t[i]);
+                rr.add(Math.abs(r[i]));
+            }
+        }
+        return List.of(tt.stream().mapToDouble(Double::doubleValue).toArray(),
+                rr.stream().mapToDouble(Double::doubleValue).toArray());
+    }
+}

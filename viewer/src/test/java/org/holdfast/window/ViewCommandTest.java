@@ -1,0 +1,88 @@
+package org.holdfast.window;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+
+import org.holdfast.window.input.Bindings;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/** Option checking of {@code holdfast view}: all of it happens before a window would open. */
+class ViewCommandTest {
+
+    @TempDir
+    Path dir;
+
+    private ViewRun.Result pattern(String... args) {
+        return ViewRun.run(input -> new PatternSource(), args);
+    }
+
+    private static void assertOneLineNaming(ViewRun.Result r, String... parts) {
+        assertEquals(2, r.exitCode(), r.err());
+        String err = r.err().strip();
+        assertFalse(err.contains("\n"), "one line: " + err);
+        assertFalse(err.contains("Exception"), err);
+        assertTrue(err.startsWith("holdfast view: "), err);
+        for (String p : parts) {
+            assertTrue(err.contains(p), "'" + p + "' in: " + err);
+        }
+    }
+
+    @Test
+    void badOptionValuesAreOneLineNamingTheOption() {
+        String d = dir.toString();
+        assertOneLineNaming(pattern("view", d, "--camera", "30,15"), "--camera", "YAW,PITCH,DISTANCE");
+        assertOneLineNaming(pattern("view", d, "--camera", "30,91,800"), "--camera", "pitch 91");
+        assertOneLineNaming(pattern("view", d, "--size", "big"), "--size", "WIDTHxHEIGHT");
+        assertOneLineNaming(pattern("view", d, "--large-shot", "0x10"), "--large-shot");
+        assertOneLineNaming(pattern("view", d, "--frames", "0"), "--frames");
+        assertOneLineNaming(pattern("view", d, "--rate", "0"), "--rate");
+        assertOneLineNaming(pattern("view", d, "--frame-gyr", "-0.1"), "--frame-gyr");
+        assertOneLineNaming(pattern("view", d, "--screenshot", dir.resolve("a.jpg").toString()), "--screenshot", ".png");
+        assertOneLineNaming(pattern("view", d, "--at-gyr", "12"), "--at-gyr", "12", "0 to 10 Gyr");
+        assertOneLineNaming(pattern("view", d, "--at-gyr", "-0.5"), "--at-gyr");
+    }
+
+    @Test
+    void malformedCommandLinesAreOneLineToo() {
+        assertOneLineNaming(pattern("view", dir.toString(), "--frames", "many"), "--frames", "many", "--help");
+        assertOneLineNaming(pattern("view", dir.toString(), "--at-gyr", "soon"), "--at-gyr");
+        assertOneLineNaming(pattern("view", dir.toString(), "--spin"), "--spin");
+    }
+
+    @Test
+    void missingInputIsNamed() {
+        assertOneLineNaming(pattern("view"), "RUN_DIR|SCENARIO");
+        assertOneLineNaming(pattern("view", dir.resolve("nowhere").toString()), "nowhere", "does not exist");
+    }
+
+    @Test
+    void badInputWritesNoScreenshot() {
+        Path shot = dir.resolve("shot.png");
+        pattern("view", dir.toString(), "--camera", "x,y,z", "--screenshot", shot.toString());
+        assertFalse(Files.exists(shot));
+    }
+
+    @Test
+    void realSourcesSayTheyCannotOpenTheInputYet() throws IOException {
+        Path run = Files.createDirectory(dir.resolve("tessera-run"));
+        ViewRun.Result r = ViewRun.run(FrameSources::open, "view", run.toString());
+        assertOneLineNaming(r, "cannot replay run folder", "tessera-run", "holdfast render");
+        Path scenario = Files.writeString(dir.resolve("ombrine.toml"), "# empty\n");
+        assertOneLineNaming(ViewRun.run(FrameSources::open, "view", scenario.toString()), "cannot evolve scenario", "live");
+        Path other = Files.writeString(dir.resolve("notes.txt"), "x\n");
+        assertOneLineNaming(ViewRun.run(FrameSources::open, "view", other.toString()), "neither a run folder nor a scenario");
+    }
+
+    @Test
+    void keysPrintsTheKeyList() {
+        ViewRun.Result r = pattern("view", "--keys");
+        assertEquals(0, r.exitCode(), r.err());
+        assertEquals(Bindings.helpLines(), r.out().lines().toList());
+    }
+}
