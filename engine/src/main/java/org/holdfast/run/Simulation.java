@@ -149,9 +149,11 @@ public final class Simulation implements RunView, AutoCloseable {
                         "step size fell to zero at " + fmt(system.time()) + " Gyr");
                 break;
             }
+            double before = system.time();
             integrator.step(system, h);
             steps++;
-            boolean onTarget = h == target - (system.time() - h) || Math.abs(system.time() - target) <= 1e-12 * Math.abs(h);
+            // a step chosen to land on the target lands there exactly, whatever the sum of sub-steps rounds to
+            boolean onTarget = h == target - before;
             if (onTarget) {
                 system.setTime(target);
             }
