@@ -196,6 +196,19 @@ public final class SceneFrame {
         return tracerCount;
     }
 
+    /** Position of one tracer in kpc, written into {@code dest} (3 floats). */
+    public float[] tracerPosition(int i, float[] dest) {
+        dest[0] = tracerX[i];
+        dest[1] = tracerY[i];
+        dest[2] = tracerZ[i];
+        return dest;
+    }
+
+    /** Host galaxy of one tracer, or -1 for a flow tracer. */
+    public int tracerHost(int i) {
+        return tracerHost[i];
+    }
+
     /** The tracer x array itself (read only), for the renderer's hot loop. */
     float[] tracerXs() {
         return tracerX;

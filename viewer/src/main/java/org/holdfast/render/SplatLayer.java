@@ -12,8 +12,8 @@ import org.holdfast.render.projection.Projection;
  * <ol>
  * <li>per chunk of tracers: camera transform, projection, inverse-square brightness and colour,
  *     each written to the tracer's own slot, and a count of tracers per band of rows;</li>
- * <li>per chunk: each tracer's index is written into the lists of the bands it touches, at
- *     offsets fixed by the counts, so every band's list is in tracer order;</li>
+ * <li>per chunk: each splat is copied into the lists of the bands it touches, at offsets fixed
+ *     by the counts, so every band's list is in tracer order and is read front to back;</li>
  * <li>per band: the band's splats are drawn in list order, touching only the band's rows.</li>
  * </ol>
  * Every pixel thus receives its splats in the same order on any thread count, and the float
@@ -25,6 +25,8 @@ final class SplatLayer {
     static final int BAND_ROWS = 16;
     /** Chunks of tracers in stages 1 and 2 (fixed, so the result ignores the thread count). */
     static final int CHUNKS = 64;
+    /** Floats per binned splat. */
+    private static final int STRIDE = 5;
 
     private final SplatKernel kernel;
     private final int width;
@@ -42,7 +44,8 @@ final class SplatLayer {
     private float[] sr = new float[0];
     private float[] sg = new float[0];
     private float[] sb = new float[0];
-    private int[] binned = new int[0];
+    /** Per band, in band order: x, y, r, g, b of each splat the band draws. */
+    private float[] binned = new float[0];
 
     SplatLayer(SplatKernel kernel, int width, int height) {
         this.kernel = kernel;
@@ -63,7 +66,7 @@ final class SplatLayer {
             sr = new float[capacity];
             sg = new float[capacity];
             sb = new float[capacity];
-            binned = new int[capacity * maxBandsPerSplat];
+            binned = new float[STRIDE * capacity * maxBandsPerSplat];
         }
     }
 
@@ -164,8 +167,17 @@ final class SplatLayer {
             int row = (int) Math.floor(py);
             int b0 = Math.max(0, (row - r) / BAND_ROWS);
             int b1 = Math.min(bands - 1, Math.max(0, row + r) / BAND_ROWS);
+            float px = sx[i];
+            float r0 = sr[i];
+            float g0 = sg[i];
+            float b0c = sb[i];
             for (int b = b0; b <= b1; b++) {
-                binned[offsets[base + b]++] = i;
+                int k = STRIDE * offsets[base + b]++;
+                binned[k] = px;
+                binned[k + 1] = py;
+                binned[k + 2] = r0;
+                binned[k + 3] = g0;
+                binned[k + 4] = b0c;
             }
         }
     }
@@ -173,9 +185,9 @@ final class SplatLayer {
     private void drawBand(int band, LightBuffer light) {
         int rowFrom = band * BAND_ROWS;
         int rowTo = Math.min(height, rowFrom + BAND_ROWS);
-        for (int k = bandStart[band], end = bandStart[band + 1]; k < end; k++) {
-            int i = binned[k];
-            kernel.draw(light, sx[i], sy[i], sr[i], sg[i], sb[i], rowFrom, rowTo);
+        float[] p = binned;
+        for (int k = STRIDE * bandStart[band], end = STRIDE * bandStart[band + 1]; k < end; k += STRIDE) {
+            kernel.draw(light, p[k], p[k + 1], p[k + 2], p[k + 3], p[k + 4], rowFrom, rowTo);
         }
     }
 
