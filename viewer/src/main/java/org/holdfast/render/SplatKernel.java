@@ -7,8 +7,8 @@ package org.holdfast.render;
  * so a splat that lies wholly inside the frame deposits exactly its brightness (up to float
  * rounding), wherever it falls between pixels.
  *
- * <p>Sub-pixel offsets are quantised to 1/{@value #PHASES} of a pixel; no exponential is
- * evaluated per splat.
+ * <p>Sub-pixel positions are rounded to the nearest 1/{@value #PHASES} of a pixel (so a splat
+ * on a pixel centre is exactly symmetric); no exponential is evaluated per splat.
  */
 public final class SplatKernel {
 
@@ -29,10 +29,10 @@ public final class SplatKernel {
         this.sigmaPx = sigmaPx;
         this.radius = Math.max(1, (int) Math.ceil(2 * sigmaPx - 0.5));
         this.taps = 2 * radius + 1;
-        this.weights = new float[PHASES * taps];
-        for (int p = 0; p < PHASES; p++) {
-            // offset of the splat from its pixel's centre, in (-0.5, 0.5)
-            double off = (p + 0.5) / PHASES - 0.5;
+        this.weights = new float[(PHASES + 1) * taps];
+        for (int p = 0; p <= PHASES; p++) {
+            // offset of the splat from its pixel's centre, in [-0.5, 0.5]
+            double off = (double) p / PHASES - 0.5;
             double sum = 0;
             double[] w = new double[taps];
             for (int i = 0; i < taps; i++) {
@@ -124,7 +124,7 @@ public final class SplatKernel {
     }
 
     private static int phase(double frac) {
-        int p = (int) (frac * PHASES);
-        return p < 0 ? 0 : p >= PHASES ? PHASES - 1 : p;
+        int p = (int) (frac * PHASES + 0.5);
+        return p < 0 ? 0 : p > PHASES ? PHASES : p;
     }
 }
