@@ -30,6 +30,11 @@ public final class ClockText {
         return String.format(Locale.ROOT, "%+.2f Gyr from today", tGyr);
     }
 
+    /** The time in Gyr from today, short: "+3.1 Gyr". */
+    public static String gyrShort(double tGyr) {
+        return String.format(Locale.ROOT, "%+.1f Gyr", tGyr);
+    }
+
     /** The scale factor: "a = 1.834". */
     public static String scaleFactor(double a) {
         return String.format(Locale.ROOT, "a = %.3f", a);

@@ -133,7 +133,7 @@ final class OverlayPainter {
         int y = dome ? (int) (h * 0.16) : margin + fs.getAscent();
         for (int k = first; k < last; k++) {
             FateEvent e = events.get(k);
-            String line = e.describe() + "  \u00b7  " + ClockText.words(e.tGyr());
+            String line = e.describe() + "  \u00b7  at " + ClockText.gyrShort(e.tGyr());
             Color c = k == last - 1 ? GOLD : GOLD.darker();
             text(g, line, dome ? (w - fs.stringWidth(line)) / 2 : margin, y, c);
             y += fs.getHeight();

@@ -16,7 +16,7 @@ public final class RenderSettings {
     private double galaxyBrightness = 60.0;
     private double galaxySigmaPx = 1.6;
     private double referenceDistanceKpc = 200.0;
-    private double trailBrightness = 0.8;
+    private double trailBrightness = 3.0;
     private double trailSpanGyr = 4.0;
     private Stretch stretch = Stretch.asinh(0.4, 9.0);
     private final EnumSet<Overlay> overlays = EnumSet.allOf(Overlay.class);
@@ -61,7 +61,7 @@ public final class RenderSettings {
         return this;
     }
 
-    /** Light per pixel of trail length at age zero (default 0.8). */
+    /** Light per pixel of trail length at age zero (default 3). */
     public RenderSettings trailBrightness(double v) {
         trailBrightness = checkRange("trail brightness", v, 0, 1e9);
         return this;

@@ -14,6 +14,8 @@ class ClockTextTest {
         assertEquals("2.1 billion years ago", ClockText.words(-2.1));
         assertEquals("+12.40 Gyr from today", ClockText.gyr(12.4));
         assertEquals("a = 1.834", ClockText.scaleFactor(1.8341));
+        assertEquals("+3.1 Gyr", ClockText.gyrShort(3.14));
+        assertEquals("-0.5 Gyr", ClockText.gyrShort(-0.46));
     }
 
     @Test
