@@ -35,13 +35,11 @@ final class AsinhStretch implements Stretch {
     @Override
     public void toPixels(LightBuffer light, int[] argb, int rowFrom, int rowTo) {
         int w = light.width();
-        float[] red = light.red;
-        float[] green = light.green;
-        float[] blue = light.blue;
+        float[] rgb = light.rgb;
         for (int k = rowFrom * w, end = rowTo * w; k < end; k++) {
-            double r = red[k];
-            double g = green[k];
-            double b = blue[k];
+            double r = rgb[3 * k];
+            double g = rgb[3 * k + 1];
+            double b = rgb[3 * k + 2];
             double i = (r + g + b) / 3;
             if (!(i > 0)) {
                 argb[k] = 0xFF000000;

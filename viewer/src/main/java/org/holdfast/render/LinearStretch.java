@@ -21,8 +21,9 @@ final class LinearStretch implements Stretch {
     public void toPixels(LightBuffer light, int[] argb, int rowFrom, int rowTo) {
         int w = light.width();
         for (int k = rowFrom * w, end = rowTo * w; k < end; k++) {
-            argb[k] = 0xFF000000 | Stretch.toByte(gain * light.red[k]) << 16
-                    | Stretch.toByte(gain * light.green[k]) << 8 | Stretch.toByte(gain * light.blue[k]);
+            float[] rgb = light.rgb;
+            argb[k] = 0xFF000000 | Stretch.toByte(gain * rgb[3 * k]) << 16
+                    | Stretch.toByte(gain * rgb[3 * k + 1]) << 8 | Stretch.toByte(gain * rgb[3 * k + 2]);
         }
     }
 }

@@ -74,9 +74,7 @@ public final class SplatKernel {
         int iTo = Math.min(taps, width - x0);
         int jFrom = Math.max(0, rowFrom - y0);
         int jTo = Math.min(taps, rowTo - y0);
-        float[] red = buf.red;
-        float[] green = buf.green;
-        float[] blue = buf.blue;
+        float[] rgb = buf.rgb;
         int wx = px * taps;
         int wy = py * taps;
         if (taps == 3 && iFrom == 0 && iTo == 3) {
@@ -89,16 +87,16 @@ public final class SplatKernel {
                 float kr = r * ky;
                 float kg = g * ky;
                 float kb = b * ky;
-                int k = (y0 + j) * width + x0;
-                red[k] += kr * k0;
-                red[k + 1] += kr * k1;
-                red[k + 2] += kr * k2;
-                green[k] += kg * k0;
-                green[k + 1] += kg * k1;
-                green[k + 2] += kg * k2;
-                blue[k] += kb * k0;
-                blue[k + 1] += kb * k1;
-                blue[k + 2] += kb * k2;
+                int k = 3 * ((y0 + j) * width + x0);
+                rgb[k] += kr * k0;
+                rgb[k + 1] += kg * k0;
+                rgb[k + 2] += kb * k0;
+                rgb[k + 3] += kr * k1;
+                rgb[k + 4] += kg * k1;
+                rgb[k + 5] += kb * k1;
+                rgb[k + 6] += kr * k2;
+                rgb[k + 7] += kg * k2;
+                rgb[k + 8] += kb * k2;
             }
             return;
         }
@@ -110,10 +108,10 @@ public final class SplatKernel {
             int row = (y0 + j) * width + x0;
             for (int i = iFrom; i < iTo; i++) {
                 float kx = weights[wx + i];
-                int k = row + i;
-                red[k] += kr * kx;
-                green[k] += kg * kx;
-                blue[k] += kb * kx;
+                int k = 3 * (row + i);
+                rgb[k] += kr * kx;
+                rgb[k + 1] += kg * kx;
+                rgb[k + 2] += kb * kx;
             }
         }
     }

@@ -140,7 +140,7 @@ final class SplatLayer {
                 continue;
             }
             int h = host[i];
-            int slot = h < 0 ? flowSlot : 3 * Math.floorMod(h, palette);
+            int slot = h < 0 ? flowSlot : 3 * (h < palette ? h : h % palette);
             double flux = (h < 0 ? flowScale : starScale) / Math.max(d2, minD2);
             sx[i] = (float) px;
             sy[i] = (float) py;

@@ -48,7 +48,7 @@ public final class RenderBench implements BenchSuite {
         double domeS = secondsPerFrame(new DomeProjection(4096, 180, 0), look, scene, inside, quick ? 2 : 8);
         results.put("render_fps_dome_4k", verdict(1 / domeS, TARGET_DOME_FPS, "frames/s"));
 
-        double java2dS = java2dSecondsPerFrame(scene, far, quick ? 1 : 3);
+        double java2dS = java2dSecondsPerFrame(scene, far, quick ? 1 : 2);
         results.put("render_java2d_s_per_frame_1080p", String.format(Locale.ROOT, "%.3f", java2dS));
         results.put("render_speedup_vs_java2d", verdict(java2dS / flatS, TARGET_SPEEDUP, "x"));
     }
