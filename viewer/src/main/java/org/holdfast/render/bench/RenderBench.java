@@ -42,6 +42,9 @@ public final class RenderBench implements BenchSuite {
         CameraPose inside = new CameraPose().lookAt(new Vector3d(0, -60, 0), new Vector3d(), new Vector3d(0, 0, 1), 50);
         results.put("render_splats", splats);
         results.put("render_threads", look.threads());
+        // other work on the machine slows every figure below; say how busy it was
+        results.put("render_load_average_at_start", String.format(Locale.ROOT, "%.2f",
+                java.lang.management.ManagementFactory.getOperatingSystemMXBean().getSystemLoadAverage()));
 
         double flatS = secondsPerFrame(new FlatProjection(1920, 1080, 50), look, scene, far, quick ? 5 : 30);
         results.put("render_fps_flat_1080p", verdict(1 / flatS, TARGET_FLAT_FPS, "frames/s"));
