@@ -104,13 +104,13 @@ public final class FrameRenderer implements AutoCloseable {
     }
 
     private Projection projectionFor(CameraPose pose) {
-        if (baseProjection instanceof FlatProjection flat && flat.fovDeg() != pose.fovDeg()) {
-            if (projection instanceof FlatProjection current && current.fovDeg() == pose.fovDeg()) {
-                return current;
-            }
-            return new FlatProjection(width, height, pose.fovDeg());
+        if (!(baseProjection instanceof FlatProjection)) {
+            return baseProjection;
         }
-        return projection;
+        if (projection instanceof FlatProjection current && current.fovDeg() == pose.fovDeg()) {
+            return current;
+        }
+        return new FlatProjection(width, height, pose.fovDeg());
     }
 
     /** Projects a world point; returns false if it is not in view. Result in {@link #out}. */

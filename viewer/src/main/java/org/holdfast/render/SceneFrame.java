@@ -52,7 +52,8 @@ public final class SceneFrame {
     }
 
     /**
-     * Sets the galaxies. Clears every trail whose arrays no longer fit the count.
+     * Sets the galaxies and forgets all trails: set them again with {@link #setTrail} after
+     * this call.
      *
      * @param count number of galaxies in view
      * @param names their names, at least count long
@@ -79,6 +80,7 @@ public final class SceneFrame {
             trailZ = new double[count][];
             trailCount = new int[count];
         }
+        java.util.Arrays.fill(trailCount, 0);
         return this;
     }
 

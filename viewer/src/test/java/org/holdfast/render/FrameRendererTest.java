@@ -189,6 +189,33 @@ class FrameRendererTest {
     }
 
     @Test
+    void flatFramesFollowTheFieldOfViewOfEachPose() {
+        SceneFrame scene = new SceneFrame().setGalaxies(1, NAMES, new int[] {0}, new double[] {30},
+                new double[] {0}, new double[] {0});
+        try (FrameRenderer r = new FrameRenderer(new FlatProjection(101, 61, 40),
+                new RenderSettings().noOverlays().threads(1).galaxyBrightness(10))) {
+            for (double fov : new double[] {20, 40, 70, 40}) {
+                CameraPose pose = new CameraPose().lookAt(new Vector3d(0, 0, REF_KPC), new Vector3d(),
+                        new Vector3d(0, 1, 0), fov);
+                LightBuffer light = r.renderLight(scene, pose);
+                double[] at = new double[2];
+                new FlatProjection(101, 61, fov).project(30, 0, -REF_KPC, at);
+                int x = (int) Math.floor(at[0]);
+                assertEquals(light.red(x, 30), maxOf(light, 0), 0, "marker at x = " + x + " for " + fov + " degrees");
+            }
+        }
+    }
+
+    @Test
+    void settingGalaxiesForgetsOldTrails() {
+        double[] two = {0, 1};
+        SceneFrame scene = cloud(0, 1).setTrail(0, 2, two, two, two, two);
+        assertEquals(2, scene.trailCount(0));
+        scene.setGalaxies(1, NAMES, new int[] {0}, new double[1], new double[1], new double[1]);
+        assertEquals(0, scene.trailCount(0));
+    }
+
+    @Test
     void overlaysDrawOnlyWhenSwitchedOn() {
         SceneFrame scene = cloud(2000, 3).setEvents(List.of(
                 new FateEvent(1.1, FateKind.MERGED, List.of("Brin", "Orrin")),
