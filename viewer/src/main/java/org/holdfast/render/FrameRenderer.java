@@ -3,7 +3,6 @@ package org.holdfast.render;
 import java.awt.image.BufferedImage;
 import java.awt.image.DataBufferInt;
 import java.util.concurrent.ForkJoinPool;
-import java.util.stream.IntStream;
 
 import org.holdfast.render.projection.FlatProjection;
 import org.holdfast.render.projection.Projection;
@@ -78,8 +77,8 @@ public final class FrameRenderer implements AutoCloseable {
         renderLight(scene, pose);
         Stretch stretch = settings.stretch();
         int bands = (height + SplatLayer.BAND_ROWS - 1) / SplatLayer.BAND_ROWS;
-        pool.submit(() -> IntStream.range(0, bands).parallel().forEach(b -> stretch.toPixels(light, pixels,
-                b * SplatLayer.BAND_ROWS, Math.min(height, (b + 1) * SplatLayer.BAND_ROWS)))).join();
+        SplatLayer.run(pool, bands, b -> stretch.toPixels(light, pixels, b * SplatLayer.BAND_ROWS,
+                Math.min(height, (b + 1) * SplatLayer.BAND_ROWS)));
         if (overlays.any()) {
             overlays.paint(image, scene, galaxyPx, kpcPerPixel(scene, pose));
         }

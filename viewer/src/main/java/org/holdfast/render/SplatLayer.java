@@ -98,7 +98,8 @@ final class SplatLayer {
         run(pool, bands, b -> drawBand(b, light));
     }
 
-    private static void run(ForkJoinPool pool, int tasks, java.util.function.IntConsumer body) {
+    /** Runs tasks 0..tasks-1 on the pool, or inline on the caller's thread when it has one thread. */
+    static void run(ForkJoinPool pool, int tasks, java.util.function.IntConsumer body) {
         if (pool.getParallelism() == 1) {
             for (int t = 0; t < tasks; t++) {
                 body.accept(t);

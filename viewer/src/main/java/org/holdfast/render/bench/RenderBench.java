@@ -51,6 +51,16 @@ public final class RenderBench implements BenchSuite {
         double domeS = secondsPerFrame(new DomeProjection(4096, 180, 0), look, scene, inside, quick ? 2 : 8);
         results.put("render_fps_dome_4k", verdict(1 / domeS, TARGET_DOME_FPS, "frames/s"));
 
+        // CPU time of one frame drawn on one thread: little affected by other work on the machine
+        double flatCpuMs = cpuMsPerFrame(new FlatProjection(1920, 1080, 50), scene, far, quick ? 3 : 10);
+        results.put("render_cpu_ms_per_frame_flat_1080p", String.format(Locale.ROOT,
+                "%.1f (on %d idle cores at best %.1f frames/s)", flatCpuMs, look.threads(),
+                1000 * look.threads() / flatCpuMs));
+        double domeCpuMs = cpuMsPerFrame(new DomeProjection(4096, 180, 0), scene, inside, quick ? 1 : 4);
+        results.put("render_cpu_ms_per_frame_dome_4k", String.format(Locale.ROOT,
+                "%.1f (on %d idle cores at best %.1f frames/s)", domeCpuMs, look.threads(),
+                1000 * look.threads() / domeCpuMs));
+
         double java2dS = java2dSecondsPerFrame(scene, far, quick ? 1 : 2);
         results.put("render_java2d_s_per_frame_1080p", String.format(Locale.ROOT, "%.3f", java2dS));
         results.put("render_speedup_vs_java2d", verdict(java2dS / flatS, TARGET_SPEEDUP, "x"));
@@ -67,6 +77,20 @@ public final class RenderBench implements BenchSuite {
                 r.render(scene, pose);
             }
             return (System.nanoTime() - t0) * 1e-9 / frames;
+        }
+    }
+
+    private static double cpuMsPerFrame(Projection p, SceneFrame scene, CameraPose pose, int frames) {
+        java.lang.management.ThreadMXBean threads = java.lang.management.ManagementFactory.getThreadMXBean();
+        try (FrameRenderer r = new FrameRenderer(p, new RenderSettings().noOverlays().threads(1))) {
+            for (int i = 0; i < 2; i++) {
+                r.render(scene, pose);
+            }
+            long t0 = threads.getCurrentThreadCpuTime();
+            for (int i = 0; i < frames; i++) {
+                r.render(scene, pose);
+            }
+            return (threads.getCurrentThreadCpuTime() - t0) * 1e-6 / frames;
         }
     }
 
