@@ -12,7 +12,7 @@ import org.joml.Vector3d;
 /**
  * A camera moving smoothly through keyframes. The eye position and the field of view follow a
  * Catmull-Rom spline (Catmull and Rom 1974, "A class of local interpolating splines", in
- * Barnhill and Riesenfeld, Computer Aided Geometric Design, Academic Press, 317): a cubic
+ * Barnhill and Riesenfeld, Computer Aided Geometric Design, Academic Press; pages not checked): a cubic
  * Hermite curve on each interval whose tangent at a keyframe is the chord between its
  * neighbours, divided by their time apart, so the motion is continuous in velocity even when
  * keyframes are unevenly spaced; one-sided chords at the ends. The orientation is the spherical

@@ -1,7 +1,7 @@
 package org.holdfast.render;
 
 /**
- * Anti-aliased lines of light after Wu (1991, Computer Graphics 25(4), 143, "An efficient
+ * Anti-aliased lines of light after Wu (1991, Computer Graphics 25(4), "An efficient
  * antialiasing technique"): along the major axis, each pixel column (or row) gets the line's
  * light split between the two pixels nearest the line, in proportion to closeness. Light is
  * added per unit length, so a line of length L and brightness b deposits L x b in all, and the

@@ -13,7 +13,7 @@ import org.junit.jupiter.api.Test;
 
 /**
  * Camera tracks. Keyframes: Catmull-Rom positions (Catmull and Rom 1974, in Barnhill and
- * Riesenfeld, Computer Aided Geometric Design, Academic Press, 317) pass through every keyframe
+ * Riesenfeld, Computer Aided Geometric Design, Academic Press; pages not checked) pass through every keyframe
  * with a continuous velocity; slerp (Shoemake 1985, SIGGRAPH Computer Graphics 19(3), 245)
  * turns at a constant rate, so halfway in time is halfway in angle.
  */

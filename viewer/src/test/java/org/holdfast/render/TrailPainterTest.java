@@ -6,7 +6,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import org.junit.jupiter.api.Test;
 
 /**
- * Wu's anti-aliased line (Wu 1991, Computer Graphics 25(4), 143) splits each column's light
+ * Wu's anti-aliased line (Wu 1991, Computer Graphics 25(4); issue from memory) splits each column's light
  * between the two nearest pixels in proportion to closeness, so the light-weighted centre of
  * each column lies on the line; we add light per unit length, so the total is length x
  * brightness.
