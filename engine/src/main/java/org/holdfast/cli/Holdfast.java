@@ -25,7 +25,11 @@ import picocli.CommandLine.Spec;
         },
         subcommands = {
             CommandLine.HelpCommand.class,
-            BenchCommand.class
+            BenchCommand.class,
+            SweepCommand.class,
+            SweepMergeCommand.class,
+            ThresholdCommand.class,
+            NewCommand.class
         })
 public final class Holdfast implements Runnable {
 
