@@ -200,6 +200,7 @@ public final class SweepCommand implements Callable<Integer> {
     /** Loads the Spark engine by name, so that nothing of Spark is touched otherwise. */
     private SweepEngine sparkEngine() {
         try {
+            Class.forName("org.apache.spark.SparkConf", false, getClass().getClassLoader());
             Class<?> c = Class.forName("org.holdfast.sweep.spark.SparkEngine");
             return (SweepEngine) c.getConstructor(String.class).newInstance(sparkMaster);
         } catch (ClassNotFoundException | NoClassDefFoundError e) {

@@ -123,7 +123,8 @@ public final class Sweep {
             return;
         }
         try (var entries = Files.list(dir)) {
-            if (entries.anyMatch(p -> !p.getFileName().toString().startsWith("."))) {
+            // A temporary file is what a sweep killed while claiming the folder leaves behind.
+            if (entries.map(p -> p.getFileName().toString()).anyMatch(n -> !n.startsWith(".") && !n.endsWith(".tmp"))) {
                 throw new ScenarioException("--out", dir.toString(), "is not empty and holds no sweep; choose another folder");
             }
         }

@@ -150,7 +150,11 @@ public final class SweepPlots {
 
     /** An axis label for a dotted key, with the unit its name carries. */
     static String label(String key) {
-        String last = key.substring(key.lastIndexOf('.') + 1);
+        String[] parts = key.split("\\.");
+        String last = parts[parts.length - 1];
+        if (last.matches("\\d+") && parts.length > 1) {
+            last = parts[parts.length - 2]; // a vector component: the unit is the vector's
+        }
         String unit = unitOf(last);
         return unit == null ? key : key + " [" + unit + "]";
     }
