@@ -147,6 +147,7 @@ public final class SweepCommand implements Callable<Integer> {
             if (keys.contains(k)) {
                 throw new ScenarioException(Overrides.OPTION, k, "is also varied with --vary; give it only once");
             }
+            check.requireKnown(Overrides.OPTION, k);
         }
         if (samples != null && samples < 1) {
             throw new ScenarioException("--samples", null, "must be at least 1 (got " + samples + ")");

@@ -67,9 +67,16 @@ public final class KeyCheck {
         }
     }
 
-    /** Whether a key can take a value written in an override (any leaf, numeric or not). */
-    public boolean knows(String key) {
-        return numbers.contains(key) || others.containsKey(key);
+    /**
+     * Checks a fixed override ({@code --set}), which may be of any type: the key must be in the
+     * file, or be an optional numeric key of an existing table.
+     *
+     * @throws ScenarioException if the scenario has no such key
+     */
+    public void requireKnown(String option, String key) {
+        if (!others.containsKey(key)) {
+            requireNumber(option, key);
+        }
     }
 
     private void walk(Node node) {

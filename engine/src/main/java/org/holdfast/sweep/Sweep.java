@@ -58,6 +58,7 @@ public final class Sweep {
      */
     public static Summary run(SweepPlan plan, Path scenario, Path dir, RunSpec spec, SweepEngine engine,
             Listener listener) throws Exception {
+        boolean fresh = !Files.exists(dir.resolve(PLAN_FILE));
         Files.createDirectories(dir);
         claim(dir, plan);
         List<RunRecord> all;
@@ -76,11 +77,21 @@ public final class Sweep {
             already = journal.existing().size();
             all = new ArrayList<>(journal.existing());
             listener.start(shardTasks.size(), already);
-            engine.run(scenario, spec, pending, r -> {
-                journal.append(r);
-                all.add(r);
-                listener.runDone(r);
-            });
+            try {
+                engine.run(scenario, spec, pending, r -> {
+                    journal.append(r);
+                    all.add(r);
+                    listener.runDone(r);
+                });
+            } catch (ScenarioException e) {
+                if (fresh && all.isEmpty()) {
+                    // Bad input found by the first run: leave no trace, so the corrected command starts clean.
+                    journal.close();
+                    Files.deleteIfExists(dir.resolve(Journal.FILE));
+                    Files.deleteIfExists(dir.resolve(PLAN_FILE));
+                }
+                throw e;
+            }
             made = pending.size();
         }
         listener.finish();

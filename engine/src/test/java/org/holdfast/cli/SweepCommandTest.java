@@ -211,7 +211,15 @@ class SweepCommandTest {
         assertBadInput("--samples: must be at least 1", "sweep", s, "--out", out, "--samples", "0");
         assertBadInput("--set: cosmology.nonsense: no such key in this scenario", "sweep", s, "--out", out,
                 "--set", "cosmology.nonsense=3");
-        assertFalse(Files.exists(tmp.resolve("bad/results.csv")), "nothing half-written");
+        assertFalse(Files.exists(tmp.resolve("bad/sweep.json")), "nothing half-written");
+        assertBadInput("--set: galaxy.Vesk.halo.concentration: no such key in this scenario", "sweep", s, "--out", out,
+                "--set", "galaxy.Vesk.halo.concentration=9");
+        // An optional key that passes the check before the runs but that the (toy) run's reader
+        // does not use: the first run reports it, and the folder is left as it was found.
+        assertBadInput("--set: run.accuracy: no such key in this scenario", "sweep", s, "--out", out,
+                "--set", "run.accuracy=0.02");
+        assertFalse(Files.exists(tmp.resolve("bad/sweep.json")), "nothing half-written");
+        assertFalse(Files.exists(tmp.resolve("bad/runs.jsonl")), "nothing half-written");
     }
 
     @Test
