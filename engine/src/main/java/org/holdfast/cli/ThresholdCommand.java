@@ -106,7 +106,11 @@ public final class ThresholdCommand implements Callable<Integer> {
         if (!(lo < hi)) {
             throw new ScenarioException("--vary", key, "LO must be below HI");
         }
-        KeyCheck.of(scenario).requireNumber("--vary", key);
+        KeyCheck check = KeyCheck.of(scenario);
+        check.requireNumber("--vary", key);
+        for (String k : Overrides.parse(set).asMap().keySet()) {
+            check.requireKnown(Overrides.OPTION, k);
+        }
         List<String> allowed = member == null ? RunOutcome.VERDICTS : MemberFate.FATES;
         if (!allowed.contains(fate)) {
             throw new ScenarioException("--fate", fate, "choose one of " + String.join(", ", allowed)
@@ -120,42 +124,58 @@ public final class ThresholdCommand implements Callable<Integer> {
             throw new ScenarioException("--samples", null, "must be at least 1 (got " + samples + ")");
         }
         int n = samples == null ? 1 : samples;
-        long[] seeds = new SeedPlan(seed).forPoint(0, n);
-        Map<String, String> fixed = Overrides.parse(set).asMap();
-        RunSpec runSpec = new RunSpec(RunFunctions.current(), samples != null,
-                withinGyr == null ? Double.NaN : withinGyr, null);
-        LocalEngine engine = new LocalEngine(workers == null ? Runtime.getRuntime().availableProcessors() : Math.max(1, workers));
-        int[] runs = {0};
+        Evaluator eval = new Evaluator(key, n);
         Threshold.Result r;
         try {
-            r = Threshold.find(x -> {
-                Map<String, String> o = new LinkedHashMap<>(fixed);
-                o.put(key, Axis.format(x));
-                List<RunTask> tasks = new ArrayList<>();
-                for (int s = 0; s < n; s++) {
-                    tasks.add(new RunTask(s, 0, s, seeds[s], o));
-                }
-                int[] hits = {0};
-                try {
-                    engine.run(scenario, runSpec, tasks, rec -> {
-                        if (holds(rec)) {
-                            hits[0]++;
-                        }
-                    });
-                } catch (RuntimeException e) {
-                    throw e;
-                } catch (Exception e) {
-                    throw new IllegalStateException(e);
-                }
-                runs[0] += n;
-                return (double) hits[0] / n;
-            }, lo, hi, tol, maxEvaluations);
+            r = Threshold.find(eval::fractionAt, lo, hi, tol, maxEvaluations);
         } catch (Threshold.NoChangeException e) {
             throw new ScenarioException("--vary", key, "the outcome is the same at both ends (fraction "
                     + e.fractionAtLow() + " at " + lo + ", " + e.fractionAtHigh() + " at " + hi + "); widen the range");
         }
-        print(key, r, runs[0], tol);
+        print(key, r, eval.runs, tol);
         return 0;
+    }
+
+    /**
+     * f(x): makes the runs at one value of the key (the same seeds at every value) and returns
+     * the fraction in which the stated outcome happened.
+     */
+    private final class Evaluator {
+        private final String key;
+        private final long[] seeds;
+        private final Map<String, String> fixed;
+        private final RunSpec runSpec;
+        private final LocalEngine engine;
+        private int runs;
+
+        Evaluator(String key, int n) {
+            this.key = key;
+            this.seeds = new SeedPlan(seed).forPoint(0, n);
+            this.fixed = Overrides.parse(set).asMap();
+            this.runSpec = new RunSpec(RunFunctions.current(), samples != null,
+                    withinGyr == null ? Double.NaN : withinGyr, null);
+            int w = workers == null ? Runtime.getRuntime().availableProcessors() : Math.max(1, workers);
+            this.engine = new LocalEngine(Math.min(w, n));
+        }
+
+        double fractionAt(double x) {
+            Map<String, String> o = new LinkedHashMap<>(fixed);
+            o.put(key, Axis.format(x));
+            List<RunTask> tasks = new ArrayList<>();
+            for (int s = 0; s < seeds.length; s++) {
+                tasks.add(new RunTask(s, 0, s, seeds[s], o));
+            }
+            int[] hits = {0};
+            try {
+                engine.run(scenario, runSpec, tasks, rec -> hits[0] += holds(rec) ? 1 : 0);
+            } catch (RuntimeException e) {
+                throw e;
+            } catch (Exception e) {
+                throw new IllegalStateException(e);
+            }
+            runs += seeds.length;
+            return (double) hits[0] / seeds.length;
+        }
     }
 
     /** Whether the stated outcome happened in a run. */

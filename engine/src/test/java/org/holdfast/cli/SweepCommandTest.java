@@ -46,7 +46,7 @@ class SweepCommandTest {
 
     private CommandRunner.Result sweep(String out, String... extra) {
         List<String> args = new ArrayList<>(List.of("sweep", scenario.toString(), "--out", tmp.resolve(out).toString(),
-                "--vary", "cosmology.dark_energy.w0=-1.3:-0.9:9", "--samples", "6", "--seed", "42"));
+                "--vary", "cosmology.dark_energy.w0=-1.3:-0.9:5", "--samples", "4", "--seed", "42"));
         args.addAll(List.of(extra));
         return CommandRunner.run(args.toArray(String[]::new));
     }
@@ -56,7 +56,7 @@ class SweepCommandTest {
         CommandRunner.Result r = sweep("a", "--workers", "2");
         assertEquals(0, r.exitCode(), r.err());
         List<List<String>> rows = SweepFiles.rows(tmp.resolve("a/results.csv"));
-        assertEquals(1 + 9 * 6, rows.size());
+        assertEquals(1 + 5 * 4, rows.size());
         assertEquals(List.of("point", "sample", "seed", "cosmology.dark_energy.w0", "toy.w_noise", "verdict",
                 "bound_until_gyr", "Orrimal.fate", "Orrimal.at_gyr", "Orrimal.with", "Vesk.fate", "Vesk.at_gyr",
                 "Vesk.with", "Tupala.fate", "Tupala.at_gyr", "Tupala.with", "energy_budget_error", "wall_s"), rows.get(0));
@@ -65,13 +65,13 @@ class SweepCommandTest {
             List<String> row = rows.get(i);
             int point = Integer.parseInt(row.get(0));
             int sample = Integer.parseInt(row.get(1));
-            assertEquals((i - 1) / 6, point, "rows sorted by point");
-            assertEquals((i - 1) % 6, sample, "then by sample");
+            assertEquals((i - 1) / 4, point, "rows sorted by point");
+            assertEquals((i - 1) % 4, sample, "then by sample");
             assertEquals(SeedPlan.seedOf(42, point, sample), Long.parseLong(row.get(2)));
-            assertEquals(-1.3 + 0.05 * point, Double.parseDouble(row.get(3)), 1e-12);
+            assertEquals(-1.3 + 0.1 * point, Double.parseDouble(row.get(3)), 1e-12);
             seeds.add(row.get(2));
         }
-        assertEquals(9 * 6, seeds.size(), "every run has its own seed");
+        assertEquals(5 * 4, seeds.size(), "every run has its own seed");
     }
 
     @Test
@@ -128,7 +128,7 @@ class SweepCommandTest {
         // The merged folder is a finished sweep: the unsharded command has nothing left to do.
         CommandRunner.Result again = sweep("merged");
         assertEquals(0, again.exitCode(), again.err());
-        assertTrue(again.out().contains("0 made now, 54 already done"), again.out());
+        assertTrue(again.out().contains("0 made now, 20 already done"), again.out());
     }
 
     @Test
@@ -139,7 +139,7 @@ class SweepCommandTest {
         assertEquals(Holdfast.EXIT_BAD_INPUT, missing.exitCode());
         assertTrue(missing.err().contains("missing shard(s) [2] of 2"), missing.err());
         List<String> other = new ArrayList<>(List.of("sweep", scenario.toString(), "--out", tmp.resolve("s2").toString(),
-                "--vary", "cosmology.dark_energy.w0=-1.3:-0.9:9", "--samples", "6", "--seed", "43", "--shard", "2/2"));
+                "--vary", "cosmology.dark_energy.w0=-1.3:-0.9:5", "--samples", "4", "--seed", "43", "--shard", "2/2"));
         assertEquals(0, CommandRunner.run(other.toArray(String[]::new)).exitCode());
         CommandRunner.Result mixed = CommandRunner.run("sweep-merge", tmp.resolve("s1").toString(),
                 tmp.resolve("s2").toString(), "--out", tmp.resolve("m2").toString());
@@ -153,14 +153,14 @@ class SweepCommandTest {
         List<String> before = SweepFiles.resultsWithoutWall(tmp.resolve("r"));
         Path journal = tmp.resolve("r/runs.jsonl");
         List<String> lines = Files.readAllLines(journal);
-        // Keep 20 whole lines and half of the 21st, as a kill in the middle of a write leaves it.
-        String kept = String.join("\n", lines.subList(0, 20)) + "\n" + lines.get(20).substring(0, lines.get(20).length() / 2);
+        // Keep 8 whole lines and half of the 9th, as a kill in the middle of a write leaves it.
+        String kept = String.join("\n", lines.subList(0, 8)) + "\n" + lines.get(8).substring(0, lines.get(8).length() / 2);
         Files.writeString(journal, kept);
         Files.delete(tmp.resolve("r/results.csv"));
         CommandRunner.Result r = sweep("r", "--workers", "2");
         assertEquals(0, r.exitCode(), r.err());
-        assertTrue(r.out().contains("34 made now, 20 already done"), r.out());
-        assertEquals(54, Files.readAllLines(journal).size());
+        assertTrue(r.out().contains("12 made now, 8 already done"), r.out());
+        assertEquals(20, Files.readAllLines(journal).size());
         assertEquals(before, SweepFiles.resultsWithoutWall(tmp.resolve("r")));
     }
 
@@ -168,7 +168,7 @@ class SweepCommandTest {
     void aFolderOfAnotherSweepIsRefused() {
         assertEquals(0, sweep("x").exitCode());
         CommandRunner.Result r = CommandRunner.run("sweep", scenario.toString(), "--out", tmp.resolve("x").toString(),
-                "--vary", "cosmology.dark_energy.w0=-1.3:-0.9:5", "--samples", "6", "--seed", "42");
+                "--vary", "cosmology.dark_energy.w0=-1.3:-0.9:7", "--samples", "4", "--seed", "42");
         assertEquals(Holdfast.EXIT_BAD_INPUT, r.exitCode());
         assertTrue(r.err().contains("holds a different sweep"), r.err());
     }
