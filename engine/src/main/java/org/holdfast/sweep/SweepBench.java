@@ -72,6 +72,10 @@ public final class SweepBench implements BenchSuite {
             results.put("sweep_runs_per_s_2_workers", round(r2));
             results.put("sweep_speedup_2_workers", round(r2 / r1));
             results.put("sweep_speedup_2_workers_target", ">= 1.8 (on 2 free cores)");
+            // What two bare threads doing the same work gain right now: the ceiling on a shared machine.
+            double bare = bareThreadSpeedup(iterations, quick ? 20 : 100);
+            results.put("sweep_bare_threads_speedup_2", round(bare));
+            results.put("sweep_speedup_share_of_bare_threads", round(r2 / r1 / bare));
             double overhead = overheadPerRunS(dir.resolve("oh"), scenario, quick ? 400 : 2000);
             results.put("sweep_overhead_per_run_ms", round(overhead * 1e3));
             results.put("sweep_overhead_share_of_1s_run_pct", round(100 * overhead / 1.0));
@@ -83,10 +87,34 @@ public final class SweepBench implements BenchSuite {
         }
     }
 
+    /** Speed-up of two plain threads, each making {@code runs} burn runs, over one thread making them. */
+    static double bareThreadSpeedup(long iterations, int runs) throws InterruptedException {
+        BurnRunFunction f = new BurnRunFunction(iterations);
+        Runnable work = () -> {
+            for (int i = 0; i < runs; i++) {
+                f.run(null, null, i, false, Double.NaN, null);
+            }
+        };
+        long t0 = System.nanoTime();
+        work.run();
+        double one = (System.nanoTime() - t0) * 1e-9;
+        Thread a = new Thread(work);
+        Thread b = new Thread(work);
+        t0 = System.nanoTime();
+        a.start();
+        b.start();
+        a.join();
+        b.join();
+        double two = (System.nanoTime() - t0) * 1e-9;
+        return 2 * one / two;
+    }
+
     /** Iterations of the burn loop that take about {@code seconds}. */
     static long calibrate(double seconds) {
         BurnRunFunction probe = new BurnRunFunction(2_000_000);
-        probe.run(null, null, 1, false, Double.NaN, null);
+        for (int i = 0; i < 5; i++) {
+            probe.run(null, null, 1, false, Double.NaN, null);
+        }
         long t0 = System.nanoTime();
         probe.run(null, null, 1, false, Double.NaN, null);
         double s = (System.nanoTime() - t0) * 1e-9;
