@@ -1,5 +1,7 @@
 package org.holdfast.sweep;
 
+import java.math.BigDecimal;
+import java.math.MathContext;
 import java.util.ArrayList;
 import java.util.List;
 
@@ -54,6 +56,8 @@ public record Axis(String key, List<Double> values) {
         }
         double start = number(key, parts[0]);
         double stop = number(key, parts[1]);
+        BigDecimal a = new BigDecimal(parts[0].trim());
+        BigDecimal span = new BigDecimal(parts[1].trim()).subtract(a);
         long count;
         try {
             count = Long.parseLong(parts[2].trim());
@@ -71,8 +75,10 @@ public record Axis(String key, List<Double> values) {
         }
         List<Double> values = new ArrayList<>((int) count);
         for (int i = 0; i < count; i++) {
-            // The last value is STOP exactly, not START + (COUNT-1) * step with its round-off.
-            values.add(i == count - 1 ? stop : start + (stop - start) * i / (count - 1));
+            // In decimal, as typed, so that -1.4:-0.9:21 gives -1.35 and not -1.3499999999999999.
+            BigDecimal v = count == 1 ? a
+                    : a.add(span.multiply(BigDecimal.valueOf(i)).divide(BigDecimal.valueOf(count - 1), MathContext.DECIMAL64));
+            values.add(v.doubleValue());
         }
         return new Axis(key, values);
     }

@@ -41,10 +41,10 @@ public final class SweepPlots {
         new Color(0x9E, 0x3D, 0x5C), new Color(0x5F, 0x7F, 0x2A)
     };
 
-    /** The map's colour ramp, from "never bound" to "always bound": ember to deep teal. */
+    /** The map's colour ramp, "never bound" to "always bound": ember to teal, light enough for dark numbers. */
     private static final Color[] RAMP = {
-        new Color(0x7A, 0x1E, 0x12), new Color(0xD9, 0x8C, 0x3F), new Color(0xF2, 0xE8, 0xCF),
-        new Color(0x6F, 0xB3, 0xA6), new Color(0x14, 0x4D, 0x55)
+        new Color(0xC2, 0x5B, 0x3A), new Color(0xE3, 0xA0, 0x5C), new Color(0xF4, 0xEC, 0xD8),
+        new Color(0x86, 0xC2, 0xB6), new Color(0x4A, 0x96, 0x92)
     };
 
     private static final Font TITLE = new Font(Font.SANS_SERIF, Font.BOLD, 18);

@@ -24,6 +24,9 @@ class AxisAndSeedTest {
         assertEquals(-1.5, a.values().get(0));
         assertEquals(-1.0, a.values().get(5));
         assertEquals(-1.3, a.values().get(2), 1e-15);
+        // Steps are taken in decimal, so grid values print as typed.
+        assertEquals(-1.35, Axis.parse("k=-1.4:-0.9:21").values().get(2));
+        assertEquals(List.of(0.1, 0.2, 0.3), Axis.parse("k=0.1:0.3:3").values());
     }
 
     @Test
