@@ -22,13 +22,14 @@ import picocli.CommandLine.Model.CommandSpec;
 @Command(name = "new",
         mixinStandardHelpOptions = true,
         description = {
-            "Writes a scenario of a random group with invented names: masses from a power-law mass",
-            "function, places uniform in a sphere, velocities scaled to the virial ratio 2T/|W| asked",
-            "for (point masses), NFW halos from a mass-concentration relation, Planck 2018 cosmology.",
+            "Writes a scenario of a random group with invented names: masses from a",
+            "power-law mass function, places uniform in a sphere, velocities scaled to",
+            "the virial ratio 2T/|W| asked for (point masses), NFW halos from a",
+            "mass-concentration relation, Planck 2018 cosmology.",
             "",
             "Example:",
-            "  holdfast new --giants 2 --dwarfs 6 --mass 3e12 --radius-kpc 600 --virial-ratio 0.8 \\",
-            "      --seed 11 --out scenarios/random-group.toml"
+            "  holdfast new --giants 2 --dwarfs 6 --mass 3e12 --radius-kpc 600 \\",
+            "      --virial-ratio 0.8 --seed 11 --out scenarios/random-group.toml"
         })
 public final class NewCommand implements Callable<Integer> {
 

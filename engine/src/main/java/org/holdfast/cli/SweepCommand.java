@@ -35,14 +35,15 @@ import picocli.CommandLine.Model.CommandSpec;
 @Command(name = "sweep",
         mixinStandardHelpOptions = true,
         description = {
-            "Runs a scenario over a grid of parameter values (the product of every --vary) and, with",
-            "--samples, over random draws of its uncertain numbers; writes one row per run to",
-            "DIR/results.csv, the fraction of runs in each fate with 95% Wilson intervals to",
-            "DIR/fractions.csv, and a picture for one or two varied keys. Stopped sweeps resume:",
-            "run the same command again.",
+            "Runs a scenario over a grid of parameter values (the product of every",
+            "--vary) and, with --samples, over random draws of its uncertain numbers.",
+            "Writes one row per run to DIR/results.csv, the fraction of runs in each",
+            "fate with 95%% Wilson intervals to DIR/fractions.csv, and a picture for",
+            "one or two varied keys. A stopped sweep resumes: run the same command again.",
             "",
             "Example:",
-            "  holdfast sweep scenarios/pair.toml --vary cosmology.dark_energy.w0=-1.6:-1.0:13 \\",
+            "  holdfast sweep scenarios/pair.toml \\",
+            "      --vary cosmology.dark_energy.w0=-1.6:-1.0:13 \\",
             "      --samples 50 --seed 7 --until 60 --out w-sweep"
         })
 public final class SweepCommand implements Callable<Integer> {

@@ -17,9 +17,10 @@ import picocli.CommandLine.Model.CommandSpec;
 @Command(name = "sweep-merge",
         mixinStandardHelpOptions = true,
         description = {
-            "Combines the folders of the shards of one sweep (made with --shard I/N) into one folder,",
-            "as if the sweep had been made in one go. Checks that all folders belong to the same",
-            "sweep, that every shard is there once and that each has finished.",
+            "Combines the folders of the shards of one sweep (made with --shard I/N)",
+            "into one folder, as if the sweep had been made in one go. Checks that the",
+            "folders belong to the same sweep, that every shard is there once and that",
+            "each has finished.",
             "",
             "Example:",
             "  holdfast sweep-merge w-sweep-shard-* --out w-sweep"

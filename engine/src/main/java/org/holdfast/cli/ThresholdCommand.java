@@ -37,13 +37,15 @@ import picocli.CommandLine.Model.CommandSpec;
 @Command(name = "threshold",
         mixinStandardHelpOptions = true,
         description = {
-            "Finds the value of one key between LO and HI at which a stated outcome starts or stops:",
-            "a member's fate (--member NAME --fate bound|merged|escaped|ripped) or the group's",
-            "verdict (--fate bound|partly-bound|dissolved without --member), reached by --within-gyr.",
-            "Bisects on the outcome; with --samples N on the fraction of N realisations (at one half).",
+            "Finds the value of one key between LO and HI at which a stated outcome",
+            "starts or stops: a member's fate (--member NAME --fate bound|merged|",
+            "escaped|ripped) or, without --member, the group's verdict (--fate bound|",
+            "partly-bound|dissolved), reached by --within-gyr. Bisects on the outcome;",
+            "with --samples N, on the fraction of N realisations (at one half).",
             "",
             "Example:",
-            "  holdfast threshold scenarios/pair.toml --vary cosmology.dark_energy.w0=-2.0:-1.0 \\",
+            "  holdfast threshold scenarios/pair.toml \\",
+            "      --vary cosmology.dark_energy.w0=-2.0:-1.0 \\",
             "      --member Tessaly --fate ripped --within-gyr 80 --tolerance 0.001"
         })
 public final class ThresholdCommand implements Callable<Integer> {

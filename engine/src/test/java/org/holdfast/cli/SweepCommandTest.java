@@ -4,7 +4,9 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import java.io.ByteArrayOutputStream;
 import java.io.IOException;
+import java.io.PrintStream;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -228,6 +230,23 @@ class SweepCommandTest {
                 "--vary", "galaxy.Vesk.velocity_kms.2=0,10");
         // The toy reads velocity_kms, so both runs use the override.
         assertEquals(0, r.exitCode(), r.err());
+    }
+
+    @Test
+    void helpTextsRenderCleanlyWithAnExample() {
+        PrintStream old = System.err;
+        ByteArrayOutputStream warnings = new ByteArrayOutputStream();
+        System.setErr(new PrintStream(warnings, true));
+        try {
+            for (String c : List.of("sweep", "sweep-merge", "threshold", "new")) {
+                CommandRunner.Result r = CommandRunner.run(c, "--help");
+                assertEquals(0, r.exitCode());
+                assertTrue(r.out().contains("Example:\n  holdfast " + c + " "), r.out());
+            }
+        } finally {
+            System.setErr(old);
+        }
+        assertEquals("", warnings.toString(), "picocli could not format a help text");
     }
 
     @Test
