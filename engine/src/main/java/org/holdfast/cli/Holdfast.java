@@ -26,8 +26,12 @@ import picocli.CommandLine.Spec;
         subcommands = {
             CommandLine.HelpCommand.class,
             ExpansionCommand.class,
-            EvolveCommand.class,
             ValidateCommand.class,
+            EvolveCommand.class,
+            SweepCommand.class,
+            SweepMergeCommand.class,
+            ThresholdCommand.class,
+            NewCommand.class,
             BenchCommand.class
         })
 public final class Holdfast implements Runnable {
