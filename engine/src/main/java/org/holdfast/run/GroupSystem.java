@@ -162,6 +162,19 @@ final class GroupSystem implements TrialSystem {
     }
 
     /** The energy budget now. */
+    /**
+     * The size of the budget's tidal terms now: |dark-energy potential| + |work of its time
+     * variation|. Near a big rip they outgrow the binding energy by many orders of magnitude,
+     * and the budget's error is then measured against them.
+     */
+    double tidalTermsMagnitude() {
+        double m = Math.abs(work.value());
+        if (tide.active()) {
+            m += Math.abs(0.5 * tide.coefficient(t) * BackgroundTide.secondMoment(bodies));
+        }
+        return m;
+    }
+
     double energyBudget() {
         CompensatedSum e = new CompensatedSum();
         e.add(kineticEnergy());

@@ -1,8 +1,8 @@
 package org.holdfast.sweep;
 
 /**
- * The one place the sweep commands take their {@link RunFunction} from. The application
- * installs the physics engine at start-up; tests install a fake.
+ * The one place the sweep commands take their {@link RunFunction} from: the physics engine
+ * by default; tests install a fake.
  */
 public final class RunFunctions {
 
@@ -16,17 +16,12 @@ public final class RunFunctions {
         installed = function;
     }
 
-    /**
-     * The installed function.
-     *
-     * @throws IllegalStateException if none is installed
-     */
+    /** The installed function, or the physics engine when none is. */
     public static RunFunction current() {
         RunFunction f = installed;
-        if (f == null) {
-            throw new IllegalStateException("no physics engine is connected to the sweep machinery "
-                    + "(RunFunctions.install was never called)");
-        }
-        return f;
+        return f == null ? ENGINE : f;
     }
+
+    /** The physics engine, used unless another function is installed. */
+    private static final RunFunction ENGINE = new EngineRunFunction();
 }
