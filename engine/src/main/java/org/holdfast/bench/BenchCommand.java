@@ -37,6 +37,32 @@ public final class BenchCommand implements Callable<Integer> {
     @Spec
     CommandSpec spec;
 
+    private static final java.util.regex.Pattern LEADING_NUMBER =
+            java.util.regex.Pattern.compile("^\\s*([-+]?[0-9]*\\.?[0-9]+(?:[eE][-+]?[0-9]+)?)(.*)$");
+
+    /**
+     * For JSON, a figure that a suite gave as text ("15.2 frames/s (target >= 20: met)") becomes
+     * its number under the key and the whole text under {@code KEY_note}, so that tools read
+     * numbers.
+     */
+    static Map<String, Object> numeric(Map<String, Object> results) {
+        Map<String, Object> out = new LinkedHashMap<>();
+        results.forEach((k, v) -> {
+            if (v instanceof String text) {
+                java.util.regex.Matcher m = LEADING_NUMBER.matcher(text);
+                if (m.matches()) {
+                    out.put(k, Double.parseDouble(m.group(1)));
+                    if (!m.group(2).isBlank()) {
+                        out.put(k + "_note", text);
+                    }
+                    return;
+                }
+            }
+            out.put(k, v);
+        });
+        return out;
+    }
+
     @Override
     public Integer call() throws Exception {
         PrintWriter out = spec.commandLine().getOut();
@@ -66,7 +92,8 @@ public final class BenchCommand implements Callable<Integer> {
                     "no benchmark suite named '" + only + "'");
         }
         if (json) {
-            out.println(new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT).writeValueAsString(results));
+            out.println(new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT)
+                    .writeValueAsString(numeric(results)));
         }
         out.flush();
         return 0;
