@@ -125,11 +125,13 @@ final class GroupSystem implements TrialSystem {
         if (tide.active()) {
             double c = tide.coefficient(t);
             double rate = tide.rate(t);
+            // |c|^(-1/2) and |c'|^(-1/3): both shrink in proportion to the time left before a rip,
+            // and neither collapses where c changes sign
             if (c != 0) {
                 tau = Math.min(tau, 1 / Math.sqrt(Math.abs(c)));
-                if (rate != 0) {
-                    tau = Math.min(tau, Math.abs(c / rate));
-                }
+            }
+            if (rate != 0) {
+                tau = Math.min(tau, 1 / Math.cbrt(Math.abs(rate)));
             }
         }
         return tau;
