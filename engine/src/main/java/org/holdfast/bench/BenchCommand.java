@@ -17,6 +17,7 @@ import picocli.CommandLine.Model.CommandSpec;
 /** {@code holdfast bench}: runs every registered {@link BenchSuite} and reports the figures. */
 @Command(name = "bench",
         mixinStandardHelpOptions = true,
+        header = "Measure the hot paths against their targets.",
         description = {
             "Measures the speed of the hot paths and prints the figures with their targets.",
             "",

@@ -17,11 +17,11 @@ import picocli.CommandLine.Spec;
         mixinStandardHelpOptions = true,
         versionProvider = Version.class,
         description = {
-            "Galaxy groups against dark energy: evolve a group in an expanding universe, decide",
-            "who stays bound, merges, escapes or is ripped away, sweep parameters, film it.",
+            "Galaxy groups against dark energy: evolve a group in an expanding universe, decide who",
+            "stays bound, merges, escapes or is ripped away, sweep parameters, watch and film it.",
             "",
             "Example:",
-            "  holdfast expansion scenarios/lambda-steady.toml"
+            "  holdfast evolve scenarios/hollin-group.toml"
         },
         subcommands = {
             CommandLine.HelpCommand.class,
@@ -56,6 +56,7 @@ public final class Holdfast implements Runnable {
         cl.setExecutionExceptionHandler(Holdfast::handleFailure);
         cl.setParameterExceptionHandler(Holdfast::handleBadOption);
         cl.setCaseInsensitiveEnumValuesAllowed(true);
+        cl.setUsageHelpWidth(100);
         return cl;
     }
 

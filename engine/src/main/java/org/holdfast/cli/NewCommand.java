@@ -21,6 +21,7 @@ import picocli.CommandLine.Model.CommandSpec;
 /** {@code holdfast new}: a scenario of a random, plausible group. */
 @Command(name = "new",
         mixinStandardHelpOptions = true,
+        header = "Write a scenario of a random, plausible group.",
         description = {
             "Writes a scenario of a random group with invented names: masses from a",
             "power-law mass function, places uniform in a sphere, velocities scaled to",

@@ -34,6 +34,7 @@ import picocli.CommandLine.Model.CommandSpec;
 /** {@code holdfast sweep}: many runs of one scenario over a grid and over samples. */
 @Command(name = "sweep",
         mixinStandardHelpOptions = true,
+        header = "Run a scenario over a grid of values and draws; fractions per fate.",
         description = {
             "Runs a scenario over a grid of parameter values (the product of every",
             "--vary) and, with --samples, over random draws of its uncertain numbers.",

@@ -16,6 +16,7 @@ import picocli.CommandLine.Model.CommandSpec;
 /** {@code holdfast sweep-merge}: the shard folders of one sweep into one folder. */
 @Command(name = "sweep-merge",
         mixinStandardHelpOptions = true,
+        header = "Combine the shard folders of one sweep.",
         description = {
             "Combines the folders of the shards of one sweep (made with --shard I/N)",
             "into one folder, as if the sweep had been made in one go. Checks that the",

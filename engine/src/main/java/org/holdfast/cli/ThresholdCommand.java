@@ -36,6 +36,7 @@ import picocli.CommandLine.Model.CommandSpec;
 /** {@code holdfast threshold}: the critical value of one parameter for a stated outcome. */
 @Command(name = "threshold",
         mixinStandardHelpOptions = true,
+        header = "Find the value of one key at which a fate changes.",
         description = {
             "Finds the value of one key between LO and HI at which a stated outcome",
             "starts or stops: a member's fate (--member NAME --fate bound|merged|",
