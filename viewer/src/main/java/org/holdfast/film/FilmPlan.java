@@ -192,8 +192,8 @@ public final class FilmPlan {
     /** @throws ScenarioException naming {@code option} when t lies outside the run */
     public static void checkTime(String option, double t, RunArchive run) {
         if (!(t >= run.earliestGyr() && t <= run.latestGyr())) {
-            throw new ScenarioException(option, null, plain(t) + " Gyr lies outside this run, which spans "
-                    + plain(run.earliestGyr()) + " to " + plain(run.latestGyr()) + " Gyr");
+            throw new ScenarioException(option, null, shown(t) + " Gyr lies outside this run, which spans "
+                    + shown(run.earliestGyr()) + " to " + shown(run.latestGyr()) + " Gyr");
         }
     }
 
@@ -204,8 +204,8 @@ public final class FilmPlan {
         for (int k = 0; k < 2; k++) {
             double t = ends[k];
             if (t < run.earliestGyr() - slack || t > run.latestGyr() + slack) {
-                throw film.error(keys[k], plain(t) + " Gyr lies outside the run, which spans " + plain(run.earliestGyr())
-                        + " to " + plain(run.latestGyr()) + " Gyr");
+                throw film.error(keys[k], shown(t) + " Gyr lies outside the run, which spans " + shown(run.earliestGyr())
+                        + " to " + shown(run.latestGyr()) + " Gyr");
             }
         }
     }
@@ -214,6 +214,14 @@ public final class FilmPlan {
         if (!Double.isNaN(t)) {
             o.put(key, plain(t));
         }
+    }
+
+    /** A time for messages: six significant digits, no trailing zeros. */
+    static String shown(double v) {
+        if (!Double.isFinite(v)) {
+            return Double.toString(v);
+        }
+        return new java.math.BigDecimal(v).round(new java.math.MathContext(6)).stripTrailingZeros().toPlainString();
     }
 
     static String plain(double v) {

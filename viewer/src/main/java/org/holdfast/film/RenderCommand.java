@@ -169,7 +169,7 @@ public final class RenderCommand implements Callable<Integer> {
             Screenshots.writePng(file, argb, img.getWidth(), img.getHeight());
         }
         say(o, String.format(Locale.ROOT, "saved %s (%dx%d %s, t = %s Gyr)", file, film.widthPx(), film.heightPx(),
-                film.view(), FilmPlan.plain(still)));
+                film.view(), FilmPlan.shown(still)));
         return 0;
     }
 
@@ -179,8 +179,8 @@ public final class RenderCommand implements Callable<Integer> {
         FrameFiles files = new FrameFiles(dir);
         int n = film.frameCount();
         say(o, String.format(Locale.ROOT, "rendering %d frames (%dx%d %s, %d per second, %s to %s Gyr) into %s", n,
-                film.widthPx(), film.heightPx(), film.view(), film.frameRate(), FilmPlan.plain(film.clock().simGyr(0)),
-                FilmPlan.plain(film.clock().simGyr(film.filmSecondOf(n))), dir));
+                film.widthPx(), film.heightPx(), film.view(), film.frameRate(), FilmPlan.shown(film.clock().simGyr(0)),
+                FilmPlan.shown(film.clock().simGyr(film.filmSecondOf(n))), dir));
         ReplayScene scene = new ReplayScene(run);
         CameraPose pose = new CameraPose();
         FrameProgress progress = new FrameProgress(o, n, FrameProgress.onTerminal(), quiet);

@@ -1,5 +1,10 @@
 package org.holdfast.replay;
 
+import java.awt.Color;
+import java.awt.Font;
+import java.awt.FontMetrics;
+import java.awt.Graphics2D;
+import java.awt.RenderingHints;
 import java.awt.image.BufferedImage;
 import java.util.Arrays;
 import java.util.List;
@@ -17,12 +22,14 @@ import org.holdfast.window.Layer;
 import org.holdfast.window.Layers;
 import org.holdfast.window.Projection;
 import org.holdfast.window.ViewState;
+import org.holdfast.window.input.Bindings;
 import org.joml.Vector3d;
 
 /**
  * The frames of {@code holdfast view} for a run folder: the CPU renderer draws the replayed scene
  * from the window's orbit camera. The window's layers switch the renderer's looks: trails,
- * star and flow tracers, names, the clock (time, scale factor and scale bar) and fate events.
+ * star and flow tracers, names, the clock (time, scale factor and scale bar), fate events and
+ * the key list.
  * The dome preview is a square 180-degree dome master centred in the window. Splats show their
  * nominal brightness from the run's overview distance, as in {@code holdfast render}.
  */
@@ -83,12 +90,38 @@ public final class RunFrameSource implements FrameSource {
         }
         double t = Math.max(startGyr(), Math.min(endGyr(), view.clock().tGyr()));
         BufferedImage img = renderer.render(scene.at(t), poseOf(c, pose));
+        if (view.layers().has(Layer.HELP)) {
+            paintKeys(img);
+        }
         if (dome) {
             Arrays.fill(argb, 0, width * height, 0xFF000000);
             int offset = (width - side) / 2 + (height - side) / 2 * width;
             img.getRGB(0, 0, side, side, argb, offset, width);
         } else {
             img.getRGB(0, 0, width, height, argb, 0, width);
+        }
+    }
+
+    /** The key list over a darkened panel at the upper right. */
+    private static void paintKeys(BufferedImage img) {
+        List<String> lines = Bindings.helpLines();
+        Graphics2D g = img.createGraphics();
+        try {
+            g.setRenderingHint(RenderingHints.KEY_TEXT_ANTIALIASING, RenderingHints.VALUE_TEXT_ANTIALIAS_ON);
+            g.setFont(new Font(Font.SANS_SERIF, Font.PLAIN, Math.max(10, img.getHeight() / 48)));
+            FontMetrics fm = g.getFontMetrics();
+            int w = lines.stream().mapToInt(fm::stringWidth).max().orElse(0) + 2 * fm.getHeight();
+            int h = (lines.size() + 1) * fm.getHeight();
+            int x = Math.max(0, img.getWidth() - w - fm.getHeight());
+            int y = fm.getHeight();
+            g.setColor(new Color(0, 0, 0, 190));
+            g.fillRect(x, y, w, h);
+            g.setColor(new Color(0xEDE6D6));
+            for (int i = 0; i < lines.size(); i++) {
+                g.drawString(lines.get(i), x + fm.getHeight(), y + (i + 1) * fm.getHeight());
+            }
+        } finally {
+            g.dispose();
         }
     }
 
