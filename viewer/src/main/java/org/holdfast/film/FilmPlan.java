@@ -28,6 +28,9 @@ public final class FilmPlan {
     /** Longest film accepted, frames (the frame file names have six digits). */
     public static final int MAX_FRAMES = 999_999;
 
+    /** Heap a frame needs per pixel, generously: linear light (12 bytes), the image (4), the splat lists. */
+    static final long BYTES_PER_PIXEL = 40;
+
     private static final Pattern SIZE = Pattern.compile("\\s*(\\d{1,6})\\s*(?:[xX]\\s*(\\d{1,6})\\s*)?");
 
     /** What the command line said about the film; null fields were not given. */
@@ -85,9 +88,17 @@ public final class FilmPlan {
         FilmSpec spec = FilmReader.read(root);
         checkWithinRun(spec, run, film);
         if (spec.frameCount() > MAX_FRAMES) {
-            String where = o.seconds() != null || o.fps() != null ? "--seconds" : film.where("length_s");
+            String where = o.seconds() != null ? "--seconds" : o.fps() != null ? "--fps" : film.where("length_s");
             throw new ScenarioException(where, null, spec.frameCount() + " frames is more than the "
                     + MAX_FRAMES + " a film may have");
+        }
+        long needBytes = BYTES_PER_PIXEL * spec.widthPx() * (long) spec.heightPx();
+        if (needBytes > 0.8 * Runtime.getRuntime().maxMemory()) {
+            String where = o.size() != null ? "--size" : film.where("frame_px");
+            throw new ScenarioException(where, null, String.format(java.util.Locale.ROOT,
+                    "%dx%d frames need about %.1f GB, more than the %.1f GB the JVM may use; choose a smaller size"
+                            + " or give java a larger -Xmx", spec.widthPx(), spec.heightPx(), needBytes / 1e9,
+                    Runtime.getRuntime().maxMemory() / 1e9));
         }
         if (o.camera() != null) {
             CameraSpec cam;

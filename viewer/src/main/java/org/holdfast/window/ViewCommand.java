@@ -136,6 +136,10 @@ public final class ViewCommand implements Callable<Integer> {
         if (!Files.exists(input)) {
             return fail("RUN_DIR|SCENARIO: '" + input + "' does not exist");
         }
+        if (!Files.isDirectory(input) && input.getFileName().toString().endsWith(".toml")) {
+            out.println("evolving " + input + " into a temporary run folder first ...");
+            out.flush();
+        }
         try (FrameSource source = opener.open(input)) {
             ViewState start;
             try {

@@ -50,6 +50,14 @@ class RenderBadInputTest {
     }
 
     @Test
+    void framesTooLargeForTheHeapAreRefusedBeforeDrawing() {
+        org.junit.jupiter.api.Assumptions.assumeTrue(
+                0.8 * Runtime.getRuntime().maxMemory() < FilmPlan.BYTES_PER_PIXEL * 16384.0 * 16384.0,
+                "this JVM could hold a 16384x16384 frame");
+        refused(new String[] {"--size", "16384x16384"}, "--size", "GB", "-Xmx");
+    }
+
+    @Test
     void stillsNeedATimeInsideTheRunAndAPngName() {
         Path poster = dir.resolve("poster.png");
         ViewRun.Result r = FilmRun.render(DemoRun.folder().toString(), "--still", "9", "--out", poster.toString());
