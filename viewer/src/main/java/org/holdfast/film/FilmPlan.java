@@ -115,6 +115,33 @@ public final class FilmPlan {
         return spec;
     }
 
+    /**
+     * The checks that need neither the run nor the film table, so that a scenario is not evolved
+     * only to hear that an option is malformed.
+     */
+    public static void precheck(Options o) {
+        if (o.projection() != null && !FilmReader.VIEWS.contains(o.projection())) {
+            throw new ScenarioException("--projection", null, "unknown projection '" + o.projection()
+                    + "'; choose one of: " + String.join(", ", FilmReader.VIEWS));
+        }
+        if (o.size() != null) {
+            size(o.size(), o.projection() != null ? o.projection() : "any");
+        }
+        if (o.fps() != null && (o.fps() < 1 || o.fps() > 240)) {
+            throw new ScenarioException("--fps", null, "must be between 1 and 240 frames per second (got " + o.fps() + ")");
+        }
+        if (o.seconds() != null && !(o.seconds() > 0 && Double.isFinite(o.seconds()))) {
+            throw new ScenarioException("--seconds", null, "must be a positive number of seconds (got " + o.seconds() + ")");
+        }
+        if (o.camera() != null) {
+            try {
+                CameraSpec.parse(o.camera());
+            } catch (IllegalArgumentException e) {
+                throw new ScenarioException("--camera", null, e.getMessage());
+            }
+        }
+    }
+
     /** The TOML root holding the [film] table: the film file, the scenario, or the default film. */
     private static Node filmRoot(Options o, RunArchive run, Path scenarioCopy, Overrides overrides) {
         if (o.filmFile() != null) {
@@ -156,7 +183,7 @@ public final class FilmPlan {
         return b.toString();
     }
 
-    /** The size option: WxH, or one number for a square dome frame. */
+    /** The size option: WxH, or one number for a square dome frame; view "any" skips the shape checks. */
     static int[] size(String text, String view) {
         Matcher m = SIZE.matcher(text);
         if (!m.matches()) {
@@ -165,7 +192,7 @@ public final class FilmPlan {
         }
         int w = Integer.parseInt(m.group(1));
         int h = m.group(2) == null ? ("panorama".equals(view) ? w / 2 : w) : Integer.parseInt(m.group(2));
-        if (m.group(2) == null && !"dome".equals(view) && !"panorama".equals(view)) {
+        if (m.group(2) == null && !"dome".equals(view) && !"panorama".equals(view) && !"any".equals(view)) {
             throw new ScenarioException("--size", null, "a " + view + " frame needs WIDTHxHEIGHT (got '" + text.trim() + "')");
         }
         if (w < 2 || h < 2 || w > 16384 || h > 16384) {

@@ -15,6 +15,7 @@ import org.holdfast.output.RunFolder;
 import org.holdfast.render.CameraPose;
 import org.holdfast.render.FrameFiles;
 import org.holdfast.render.FrameRenderer;
+import org.holdfast.render.RenderSettings;
 import org.holdfast.replay.ReplayScene;
 import org.holdfast.replay.RunArchive;
 import org.holdfast.replay.TemporaryRun;
@@ -117,8 +118,7 @@ public final class RenderCommand implements Callable<Integer> {
                 runDir = temp.dir();
             }
             RunArchive run = RunArchive.open(runDir);
-            FilmSpec film = FilmPlan.resolve(new FilmPlan.Options(projection, size, fps, seconds, fromGyr, toGyr,
-                    filmFile, camera), run, runDir.resolve(RunFolder.SCENARIO_COPY));
+            FilmSpec film = FilmPlan.resolve(options(), run, runDir.resolve(RunFolder.SCENARIO_COPY));
             return still != null ? renderStill(o, run, film) : renderFilm(o, run, film);
         } finally {
             if (temp != null) {
@@ -127,8 +127,13 @@ public final class RenderCommand implements Callable<Integer> {
         }
     }
 
+    private FilmPlan.Options options() {
+        return new FilmPlan.Options(projection, size, fps, seconds, fromGyr, toGyr, filmFile, camera);
+    }
+
     /** Checks that need no run, before anything is evolved or written. */
     private void checkOptions() {
+        FilmPlan.precheck(options());
         if (!Files.exists(input)) {
             throw new ScenarioException(input.toString(), null, "no such run folder or scenario file");
         }
@@ -223,8 +228,8 @@ public final class RenderCommand implements Callable<Integer> {
     }
 
     /** The film's looks, with splats at their nominal brightness seen from the run's overview distance. */
-    private org.holdfast.render.RenderSettings settings(FilmSpec film, ReplayScene scene) {
-        org.holdfast.render.RenderSettings s = film.renderSettings().referenceDistanceKpc(scene.overviewDistanceKpc());
+    private RenderSettings settings(FilmSpec film, ReplayScene scene) {
+        RenderSettings s = film.renderSettings().referenceDistanceKpc(scene.overviewDistanceKpc());
         return threads == null ? s : s.threads(threads);
     }
 

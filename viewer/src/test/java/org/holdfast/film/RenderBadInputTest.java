@@ -58,6 +58,17 @@ class RenderBadInputTest {
     }
 
     @Test
+    void aScenarioIsNotEvolvedOnlyToRefuseAMalformedOption() {
+        long t0 = System.nanoTime();
+        RenderCommandTest.assertOneLine(FilmRun.render(DemoRun.SCENARIO.toString(), "--size", "0x0"), "--size");
+        RenderCommandTest.assertOneLine(FilmRun.render(DemoRun.SCENARIO.toString(), "--projection", "globe"),
+                "--projection");
+        RenderCommandTest.assertOneLine(FilmRun.render(DemoRun.SCENARIO.toString(), "--camera", "1,2"), "--camera");
+        // Evolving the full demo takes far longer than a second; refusing takes milliseconds.
+        assertFalse((System.nanoTime() - t0) * 1e-9 > 1.0, "refused before evolving");
+    }
+
+    @Test
     void stillsNeedATimeInsideTheRunAndAPngName() {
         Path poster = dir.resolve("poster.png");
         ViewRun.Result r = FilmRun.render(DemoRun.folder().toString(), "--still", "9", "--out", poster.toString());
