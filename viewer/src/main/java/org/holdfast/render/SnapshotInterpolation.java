@@ -51,6 +51,29 @@ public final class SnapshotInterpolation {
         }
     }
 
+    /**
+     * Cubic Hermite interpolation of float coordinates (tracers saved with their velocities).
+     *
+     * @param v0 rates at t0 in the units of {@code x0} per Gyr after multiplying by
+     *        {@code rateScale} (pass {@link org.holdfast.units.Units#KMS_TO_KPC_PER_GYR} for km/s)
+     * @param out receives n values (may not alias the inputs)
+     */
+    public static void hermite(double t0, float[] x0, float[] v0, double t1, float[] x1, float[] v1, double t,
+            double rateScale, int n, float[] out) {
+        checkInterval(t0, t1, t);
+        double h = t1 - t0;
+        double s = (t - t0) / h;
+        double s2 = s * s;
+        double s3 = s2 * s;
+        double h00 = 2 * s3 - 3 * s2 + 1;
+        double h10 = (s3 - 2 * s2 + s) * h * rateScale;
+        double h01 = -2 * s3 + 3 * s2;
+        double h11 = (s3 - s2) * h * rateScale;
+        for (int i = 0; i < n; i++) {
+            out[i] = (float) (h00 * x0[i] + h10 * v0[i] + h01 * x1[i] + h11 * v1[i]);
+        }
+    }
+
     /** Straight-line blending of float coordinates (tracers) at t in [t0, t1]. */
     public static void linear(double t0, float[] x0, double t1, float[] x1, double t, int n, float[] out) {
         checkInterval(t0, t1, t);

@@ -1,6 +1,7 @@
 package org.holdfast.viewer;
 
 import org.holdfast.cli.Holdfast;
+import org.holdfast.film.RenderCommand;
 import org.holdfast.window.FrameSources;
 import org.holdfast.window.ViewCommand;
 
@@ -23,6 +24,7 @@ public final class HoldfastFull {
     /** The full command line, with {@code holdfast view} taking its frames from {@code sources}. */
     public static CommandLine commandLine(FrameSources.SourceOpener sources) {
         CommandLine cl = Holdfast.commandLine();
+        cl.addSubcommand("render", new RenderCommand());
         cl.addSubcommand("view", new ViewCommand(sources));
         return cl;
     }

@@ -2,10 +2,16 @@ package org.holdfast.window;
 
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.List;
+
+import org.holdfast.replay.RunArchive;
+import org.holdfast.replay.RunFrameSource;
+import org.holdfast.replay.TemporaryRun;
+import org.holdfast.scenario.ScenarioException;
 
 /**
  * Opens the frame source for what {@code holdfast view} was given: a finished run's folder
- * (replayed from its snapshots) or a scenario file (evolved live as the clock plays). This is
+ * (replayed from its snapshots) or a scenario file (evolved first, then replayed). This is
  * the one place that connects the window to the renderer and the engine.
  */
 public final class FrameSources {
@@ -13,15 +19,27 @@ public final class FrameSources {
     private FrameSources() {
     }
 
-    /** Opens a source for {@code input}; see {@link SourceOpener}. */
+    /**
+     * Opens a source for {@code input}: a run folder is replayed from its snapshots; a scenario
+     * file is first evolved into a temporary run folder (removed when the source closes) and
+     * then replayed, so the clock can run both ways.
+     */
     public static FrameSource open(Path input) throws CannotOpenException {
-        if (Files.isDirectory(input)) {
-            throw new CannotOpenException("cannot replay run folder '" + input
-                    + "' yet: this build has no replay renderer connected to the window");
-        }
-        if (input.getFileName() != null && input.getFileName().toString().endsWith(".toml")) {
-            throw new CannotOpenException("cannot evolve scenario '" + input
-                    + "' live yet: this build has no live renderer connected to the window");
+        try {
+            if (Files.isDirectory(input)) {
+                return new RunFrameSource(RunArchive.open(input), null);
+            }
+            if (input.getFileName() != null && input.getFileName().toString().endsWith(".toml")) {
+                TemporaryRun run = TemporaryRun.evolve(input, List.of(), null);
+                try {
+                    return new RunFrameSource(RunArchive.open(run.dir()), run);
+                } catch (RuntimeException e) {
+                    run.close();
+                    throw e;
+                }
+            }
+        } catch (ScenarioException e) {
+            throw new CannotOpenException(e.getMessage());
         }
         throw new CannotOpenException("'" + input + "' is neither a run folder nor a scenario (.toml) file");
     }

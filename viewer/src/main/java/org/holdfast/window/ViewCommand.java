@@ -25,10 +25,11 @@ import picocli.CommandLine.Spec;
         mixinStandardHelpOptions = true,
         header = "Watch and steer a run in a window.",
         description = {
-            "Opens a window on a finished run (its folder of snapshots) or on a scenario",
-            "evolved live as the clock plays. Drag to turn the camera, wheel to zoom, H in",
-            "the window (or --keys) for the keys. With --frames it shows that many frames",
-            "and quits: for rehearsals and tests.",
+            "Opens a window on a finished run (its folder of snapshots) or on a scenario,",
+            "which is first evolved into a temporary run folder (removed on quitting) so",
+            "the clock can run both ways. Drag to turn the camera, wheel to zoom, H in the",
+            "window (or --keys) for the keys. With --frames it shows that many frames and",
+            "quits: for rehearsals and tests.",
             "",
             "Examples:",
             "  holdfast view runs/tessera-trio",
@@ -42,7 +43,7 @@ public final class ViewCommand implements Callable<Integer> {
     static final int EXIT_BAD_INPUT = 2;
 
     @Parameters(index = "0", arity = "0..1", paramLabel = "RUN_DIR|SCENARIO",
-            description = "A run folder to replay or a scenario (.toml) to evolve live.")
+            description = "A run folder to replay or a scenario (.toml) to evolve first.")
     Path input;
 
     @Option(names = "--size", paramLabel = "WxH", defaultValue = "1280x720",
@@ -135,6 +136,10 @@ public final class ViewCommand implements Callable<Integer> {
         }
         if (!Files.exists(input)) {
             return fail("RUN_DIR|SCENARIO: '" + input + "' does not exist");
+        }
+        if (!Files.isDirectory(input) && input.getFileName().toString().endsWith(".toml")) {
+            out.println("evolving " + input + " into a temporary run folder first ...");
+            out.flush();
         }
         try (FrameSource source = opener.open(input)) {
             ViewState start;

@@ -69,12 +69,13 @@ class ViewCommandTest {
     }
 
     @Test
-    void realSourcesSayTheyCannotOpenTheInputYet() throws IOException {
+    void realSourcesNameWhatTheyCannotOpen() throws IOException {
         Path run = Files.createDirectory(dir.resolve("tessera-run"));
         ViewRun.Result r = ViewRun.run(FrameSources::open, "view", run.toString());
-        assertOneLineNaming(r, "cannot replay run folder", "tessera-run", "holdfast render");
+        assertOneLineNaming(r, "tessera-run", "no snapshots", "holdfast render");
         Path scenario = Files.writeString(dir.resolve("ombrine.toml"), "# empty\n");
-        assertOneLineNaming(ViewRun.run(FrameSources::open, "view", scenario.toString()), "cannot evolve scenario", "live");
+        assertOneLineNaming(ViewRun.run(FrameSources::open, "view", scenario.toString()), "ombrine.toml",
+                "missing required table [cosmology]");
         Path other = Files.writeString(dir.resolve("notes.txt"), "x\n");
         assertOneLineNaming(ViewRun.run(FrameSources::open, "view", other.toString()), "neither a run folder nor a scenario");
     }

@@ -1,0 +1,93 @@
+package org.holdfast.film;
+
+import java.io.IOException;
+import java.io.UncheckedIOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.nio.file.StandardCopyOption;
+import java.util.LinkedHashMap;
+import java.util.Locale;
+import java.util.Map;
+
+import org.holdfast.render.CameraPose;
+import org.holdfast.scenario.ScenarioException;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import com.fasterxml.jackson.databind.SerializationFeature;
+
+/**
+ * {@code film.json} in a frames folder: what film the frames belong to (input, view, size,
+ * rate, frame count, clock and camera at both ends). A restarted render skips the frames
+ * already there only when this matches, so a changed option can never leave a folder with
+ * frames of two different films mixed.
+ */
+final class FilmManifest {
+
+    /** File name inside the frames folder. */
+    static final String FILE = "film.json";
+
+    private static final ObjectMapper JSON = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
+
+    private FilmManifest() {
+    }
+
+    /**
+     * Takes the folder for this film: writes the manifest if it is new or empty, checks it if
+     * frames are already there.
+     *
+     * @throws ScenarioException naming --out when the folder holds something else
+     */
+    static void claim(Path dir, Path input, FilmSpec film, String cameraOption) {
+        Map<String, Object> m = describe(input, film, cameraOption);
+        Path file = dir.resolve(FILE);
+        try {
+            if (Files.isRegularFile(file)) {
+                JsonNode had = JSON.readTree(file.toFile());
+                if (!had.equals(JSON.valueToTree(m))) {
+                    throw new ScenarioException("--out", null, dir + " holds frames of a different film (see its "
+                            + FILE + "); choose another --out or remove that folder");
+                }
+                return;
+            }
+            if (Files.isDirectory(dir)) {
+                try (var s = Files.list(dir)) {
+                    if (s.findAny().isPresent()) {
+                        throw new ScenarioException("--out", null, dir + " is not empty and holds no " + FILE
+                                + "; choose another --out or remove that folder");
+                    }
+                }
+            }
+            Files.createDirectories(dir);
+            Path tmp = dir.resolve(FILE + ".part");
+            JSON.writeValue(tmp.toFile(), m);
+            Files.move(tmp, file, StandardCopyOption.REPLACE_EXISTING, StandardCopyOption.ATOMIC_MOVE);
+        } catch (IOException e) {
+            throw new UncheckedIOException("cannot write " + file, e);
+        }
+    }
+
+    private static Map<String, Object> describe(Path input, FilmSpec film, String cameraOption) {
+        Map<String, Object> m = new LinkedHashMap<>();
+        m.put("input", input.toAbsolutePath().normalize().toString());
+        m.put("view", film.view());
+        m.put("width_px", film.widthPx());
+        m.put("height_px", film.heightPx());
+        m.put("frame_rate", film.frameRate());
+        m.put("frames", film.frameCount());
+        m.put("length_s", film.lengthS());
+        m.put("first_gyr", film.clock().simGyr(0));
+        m.put("last_gyr", film.clock().simGyr(film.filmSecondOf(film.frameCount())));
+        m.put("camera", cameraOption == null ? "film" : cameraOption);
+        m.put("eye_first_kpc", eye(film, 0));
+        m.put("eye_last_kpc", eye(film, film.filmSecondOf(film.frameCount())));
+        m.put("overlays", film.overlays().stream().map(o -> o.name().toLowerCase(Locale.ROOT)).sorted().toList());
+        return m;
+    }
+
+    private static String eye(FilmSpec film, double s) {
+        CameraPose p = film.camera().poseAt(s, new CameraPose());
+        return String.format(Locale.ROOT, "%.6g, %.6g, %.6g, fov %.6g", p.eyeKpc().x(), p.eyeKpc().y(), p.eyeKpc().z(),
+                p.fovDeg());
+    }
+}

@@ -1,0 +1,251 @@
+package org.holdfast.film;
+
+import java.awt.image.BufferedImage;
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import java.util.Optional;
+import java.util.concurrent.Callable;
+
+import org.holdfast.output.RunFolder;
+import org.holdfast.render.CameraPose;
+import org.holdfast.render.FrameFiles;
+import org.holdfast.render.FrameRenderer;
+import org.holdfast.render.RenderSettings;
+import org.holdfast.replay.ReplayScene;
+import org.holdfast.replay.RunArchive;
+import org.holdfast.replay.TemporaryRun;
+import org.holdfast.scenario.ScenarioException;
+import org.holdfast.window.Screenshots;
+
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
+
+/** {@code holdfast render}: the frames of a film, a video of them, or one still, without a window. */
+@Command(name = "render",
+        mixinStandardHelpOptions = true,
+        description = {
+            "Renders a run as numbered PNG frames (frame_000001.png, ...), flat, fulldome",
+            "fisheye (dome master) or 360-degree panorama, and encodes them into a video when",
+            "ffmpeg is on the PATH. A scenario file is first evolved into a temporary run",
+            "folder (removed afterwards); render a run folder to keep the run. The film is",
+            "the [film] table of --film FILE, else of the run's scenario, else a default:",
+            "20 s, a quarter orbit around the group, a clock over the whole run (a countdown",
+            "when the run stopped before a big rip). Options replace the table's keys. Run",
+            "the same command again to carry on: finished frames are kept and skipped.",
+            "",
+            "Examples:",
+            "  holdfast render runs/hollin --projection dome --size 2048 --fps 30 \\",
+            "      --seconds 40 --out dome-frames --video hollin-dome.mp4",
+            "  holdfast render runs/hollin --still 4.5 --camera 30,15,4000 --out poster.png"
+        })
+public final class RenderCommand implements Callable<Integer> {
+
+    @Parameters(index = "0", paramLabel = "RUN_DIR|SCENARIO",
+            description = "A run folder from holdfast evolve, or a scenario (.toml) to evolve first.")
+    Path input;
+
+    @Option(names = "--projection", paramLabel = "VIEW", description = "flat, dome or panorama.")
+    String projection;
+
+    @Option(names = "--size", paramLabel = "WxH",
+            description = "Frame size in pixels, e.g. 1920x1080; a dome takes one number (2048). Even sides.")
+    String size;
+
+    @Option(names = "--fps", paramLabel = "N", description = "Frames per second of film, 1 to 240.")
+    Integer fps;
+
+    @Option(names = "--seconds", paramLabel = "S", description = "Film length in seconds.")
+    Double seconds;
+
+    @Option(names = "--from-gyr", paramLabel = "T", description = "Simulated time at the first frame, Gyr.")
+    Double fromGyr;
+
+    @Option(names = "--to-gyr", paramLabel = "T", description = "Simulated time at the last frame, Gyr.")
+    Double toGyr;
+
+    @Option(names = "--film", paramLabel = "FILE", description = "A TOML file whose [film] table sets the film.")
+    Path filmFile;
+
+    @Option(names = "--camera", paramLabel = "YAW,PITCH,DIST[,FOV]",
+            description = "A fixed camera instead of the film's, as holdfast view --camera: yaw and pitch in "
+                    + "degrees, distance from the centre in kpc, optional field of view, e.g. 30,15,4000.")
+    String camera;
+
+    @Option(names = "--still", paramLabel = "T",
+            description = "Render only the frame at T Gyr, as one PNG (--out names the file; default "
+                    + "NAME-still-T.png here).")
+    Double still;
+
+    @Option(names = "--out", paramLabel = "DIR",
+            description = "Folder for the frames (default NAME-VIEW-frames here), or the PNG of a --still.")
+    Path out;
+
+    @Option(names = "--video", paramLabel = "FILE.mp4", description = "Also encode the frames with ffmpeg (H.264, yuv420p).")
+    Path video;
+
+    @Option(names = "--set", paramLabel = "KEY=VALUE",
+            description = "With a scenario: override a value before evolving it (repeatable), as holdfast evolve --set.")
+    List<String> set = new ArrayList<>();
+
+    @Option(names = "--threads", paramLabel = "N", description = "Threads drawing each frame (default: all cores).")
+    Integer threads;
+
+    @Option(names = "--quiet", description = "Print nothing but errors.")
+    boolean quiet;
+
+    @Spec
+    CommandSpec spec;
+
+    @Override
+    public Integer call() throws Exception {
+        checkOptions();
+        PrintWriter o = spec.commandLine().getOut();
+        boolean scenario = !Files.isDirectory(input);
+        TemporaryRun temp = null;
+        try {
+            Path runDir = input;
+            if (scenario) {
+                say(o, "evolving " + input + " into a temporary run folder first ...");
+                temp = TemporaryRun.evolve(input, set, null);
+                runDir = temp.dir();
+            }
+            RunArchive run = RunArchive.open(runDir);
+            FilmSpec film = FilmPlan.resolve(options(), run, runDir.resolve(RunFolder.SCENARIO_COPY));
+            return still != null ? renderStill(o, run, film) : renderFilm(o, run, film);
+        } finally {
+            if (temp != null) {
+                temp.close();
+            }
+        }
+    }
+
+    private FilmPlan.Options options() {
+        return new FilmPlan.Options(projection, size, fps, seconds, fromGyr, toGyr, filmFile, camera);
+    }
+
+    /** Checks that need no run, before anything is evolved or written. */
+    private void checkOptions() {
+        FilmPlan.precheck(options());
+        if (!Files.exists(input)) {
+            throw new ScenarioException(input.toString(), null, "no such run folder or scenario file");
+        }
+        if (!Files.isDirectory(input) && !input.getFileName().toString().endsWith(".toml")) {
+            throw new ScenarioException(input.toString(), null, "neither a run folder nor a scenario (.toml) file");
+        }
+        if (Files.isDirectory(input) && !set.isEmpty()) {
+            throw new ScenarioException("--set", null, "only for a scenario; a run folder is already evolved");
+        }
+        if (threads != null && (threads < 1 || threads > 1024)) {
+            throw new ScenarioException("--threads", null, "must be 1 to 1024 (got " + threads + ")");
+        }
+        if (still != null && !Double.isFinite(still)) {
+            throw new ScenarioException("--still", null, "must be a time in Gyr (got " + still + ")");
+        }
+        if (still != null && video != null) {
+            throw new ScenarioException("--video", null, "a still is one picture; leave out --video or --still");
+        }
+        if (still != null && out != null && !lowerName(out).endsWith(".png")) {
+            throw new ScenarioException("--out", null, "a still is one PNG: give a file name ending in .png (got " + out + ")");
+        }
+        if (still == null && out != null && Files.exists(out) && !Files.isDirectory(out)) {
+            throw new ScenarioException("--out", null, out + " is a file, not a folder for frames");
+        }
+        if (video != null && !lowerName(video).endsWith(".mp4")) {
+            throw new ScenarioException("--video", null, "expected a file name ending in .mp4 (got " + video + ")");
+        }
+    }
+
+    private int renderStill(PrintWriter o, RunArchive run, FilmSpec film) throws IOException {
+        FilmPlan.checkTime("--still", still, run);
+        double filmS = Math.max(0, Math.min(film.lengthS(), film.clock().filmS(still)));
+        Path file = out != null ? out : Path.of(String.format(Locale.ROOT, "%s-still-%s.png", stem(), FilmPlan.plain(still)));
+        ReplayScene scene = new ReplayScene(run);
+        try (FrameRenderer r = new FrameRenderer(film.projection(), settings(film, scene))) {
+            BufferedImage img = r.render(scene.at(still), film.camera().poseAt(filmS, new CameraPose()));
+            int[] argb = img.getRGB(0, 0, img.getWidth(), img.getHeight(), null, 0, img.getWidth());
+            Screenshots.writePng(file, argb, img.getWidth(), img.getHeight());
+        }
+        say(o, String.format(Locale.ROOT, "saved %s (%dx%d %s, t = %s Gyr)", file, film.widthPx(), film.heightPx(),
+                film.view(), FilmPlan.shown(still)));
+        return 0;
+    }
+
+    private int renderFilm(PrintWriter o, RunArchive run, FilmSpec film) throws IOException, InterruptedException {
+        Path dir = out != null ? out : Path.of(stem() + "-" + film.view() + "-frames");
+        FilmManifest.claim(dir, input, film, camera);
+        FrameFiles files = new FrameFiles(dir);
+        int n = film.frameCount();
+        say(o, String.format(Locale.ROOT, "rendering %d frames (%dx%d %s, %d per second, %s to %s Gyr) into %s", n,
+                film.widthPx(), film.heightPx(), film.view(), film.frameRate(), FilmPlan.shown(film.clock().simGyr(0)),
+                FilmPlan.shown(film.clock().simGyr(film.filmSecondOf(n))), dir));
+        ReplayScene scene = new ReplayScene(run);
+        CameraPose pose = new CameraPose();
+        FrameProgress progress = new FrameProgress(o, n, FrameProgress.onTerminal(), quiet);
+        try (FrameRenderer r = new FrameRenderer(film.projection(), settings(film, scene)); progress) {
+            for (int i = 1; i <= n; i++) {
+                if (files.isComplete(i)) {
+                    progress.frameDone(false);
+                    continue;
+                }
+                double s = film.filmSecondOf(i);
+                double t = Math.max(run.earliestGyr(), Math.min(run.latestGyr(), film.clock().simGyr(s)));
+                files.write(i, r.render(scene.at(t), film.camera().poseAt(s, pose)));
+                progress.frameDone(true);
+            }
+        }
+        say(o, String.format(Locale.ROOT, "%d frames drawn, %d already there, in %.1f s", progress.drawn(),
+                n - progress.drawn(), progress.seconds()));
+        return video == null ? 0 : encode(dir, film);
+    }
+
+    private int encode(Path dir, FilmSpec film) throws IOException, InterruptedException {
+        Optional<Path> ffmpeg = VideoEncoder.ffmpeg();
+        PrintWriter err = spec.commandLine().getErr();
+        if (ffmpeg.isEmpty()) {
+            err.println("holdfast render: ffmpeg is not on the PATH, so no video was made; the frames are in " + dir
+                    + "; encode them later with: " + String.join(" ",
+                            VideoEncoder.command("ffmpeg", dir, film.frameRate(), video)));
+            err.flush();
+            return 0;
+        }
+        String complaint = VideoEncoder.encode(ffmpeg.get(), dir, film.frameRate(), video);
+        if (complaint != null) {
+            err.println("holdfast render: ffmpeg could not encode " + video + ": " + complaint + " (the frames are in "
+                    + dir + ")");
+            err.flush();
+            return 1;
+        }
+        say(spec.commandLine().getOut(), "saved " + video);
+        return 0;
+    }
+
+    /** The film's looks, with splats at their nominal brightness seen from the run's overview distance. */
+    private RenderSettings settings(FilmSpec film, ReplayScene scene) {
+        RenderSettings s = film.renderSettings().referenceDistanceKpc(scene.overviewDistanceKpc());
+        return threads == null ? s : s.threads(threads);
+    }
+
+    private String stem() {
+        Path name = input.toAbsolutePath().normalize().getFileName();
+        return name == null ? "run" : name.toString().replaceFirst("\\.toml$", "");
+    }
+
+    private static String lowerName(Path p) {
+        return p.getFileName() == null ? "" : p.getFileName().toString().toLowerCase(Locale.ROOT);
+    }
+
+    private void say(PrintWriter o, String line) {
+        if (!quiet) {
+            o.println(line);
+            o.flush();
+        }
+    }
+}

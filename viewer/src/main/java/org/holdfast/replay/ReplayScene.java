@@ -1,0 +1,229 @@
+package org.holdfast.replay;
+
+import java.util.ArrayList;
+import java.util.List;
+
+import org.holdfast.render.FateEvent;
+import org.holdfast.render.FateKind;
+import org.holdfast.render.SceneFrame;
+import org.holdfast.render.SnapshotInterpolation;
+import org.holdfast.units.Units;
+
+/**
+ * Fills a {@link SceneFrame} for any time of a run from its two nearest snapshots. Galaxies and
+ * tracers both move along the cubic Hermite interpolant of their saved positions and velocities
+ * (exact for motion that is cubic in time between snapshots); the scale factor, shown only as a
+ * number, is blended linearly. A galaxy that merges between two snapshots glides from its own
+ * last state towards its survivor's next one and disappears at the merger's time. Trails are
+ * the saved snapshot positions up to now (from {@code tracks.csv}) ending at the current one.
+ *
+ * <p>Holds its arrays and reuses them frame after frame; one scene per renderer.
+ */
+public final class ReplayScene {
+
+    private final RunArchive run;
+    private final SceneFrame frame = new SceneFrame();
+    private final List<String> order;
+    private String[] names = new String[0];
+    private int[] colour = new int[0];
+    private double[] gx = new double[0];
+    private double[] gy = new double[0];
+    private double[] gz = new double[0];
+    private float[] tx = new float[0];
+    private float[] ty = new float[0];
+    private float[] tz = new float[0];
+    private final List<FateEvent> shown = new ArrayList<>();
+
+    public ReplayScene(RunArchive run) {
+        this.run = run;
+        this.order = run.initialNames();
+    }
+
+    /** The run replayed. */
+    public RunArchive run() {
+        return run;
+    }
+
+    /**
+     * The scene at {@code tGyr}, which must lie within the run.
+     *
+     * @throws IllegalArgumentException for a time outside the snapshots
+     */
+    public SceneFrame at(double tGyr) {
+        if (!(tGyr >= run.earliestGyr() && tGyr <= run.latestGyr())) {
+            throw new IllegalArgumentException("time " + tGyr + " Gyr outside the run (" + run.earliestGyr()
+                    + " to " + run.latestGyr() + ")");
+        }
+        int i = run.bracket(tGyr);
+        Snapshot s0 = run.snapshot(i);
+        Snapshot s1 = run.snapshotCount() > 1 ? run.snapshot(i + 1) : s0;
+        fillGalaxies(s0, s1, tGyr);
+        fillTracers(s0, s1, tGyr);
+        double a = s1 == s0 ? s0.scaleFactor()
+                : s0.scaleFactor() + (s1.scaleFactor() - s0.scaleFactor()) * (tGyr - s0.tGyr()) / (s1.tGyr() - s0.tGyr());
+        frame.setClock(tGyr, a);
+        shown.clear();
+        double dir = run.lastGyr() >= run.firstGyr() ? 1 : -1;
+        for (FateEvent e : run.events()) {
+            if ((e.tGyr() - tGyr) * dir <= 0) {
+                shown.add(e);
+            }
+        }
+        frame.setEvents(shown);
+        return frame;
+    }
+
+    /** Position of galaxy {@code name} at {@code tGyr} into xyz; false when it is not there then. */
+    public boolean centreOf(String name, double tGyr, double[] xyz) {
+        SceneFrame f = at(tGyr);
+        for (int g = 0; g < f.galaxyCount(); g++) {
+            if (f.name(g).equals(name)) {
+                xyz[0] = f.galaxyX(g);
+                xyz[1] = f.galaxyY(g);
+                xyz[2] = f.galaxyZ(g);
+                return true;
+            }
+        }
+        return false;
+    }
+
+    private void fillGalaxies(Snapshot s0, Snapshot s1, double t) {
+        int n = s0.galaxyCount();
+        ensureGalaxies(n);
+        double k = Units.KMS_TO_KPC_PER_GYR;
+        int shownCount = 0;
+        for (int g = 0; g < n; g++) {
+            String name = s0.names()[g];
+            int j = s1.indexOf(name);
+            if (s1 == s0) {
+                j = g;
+            } else if (j < 0) {
+                FateEvent merger = mergerOf(name, s0.tGyr(), s1.tGyr());
+                if (merger != null && (t - merger.tGyr()) * (s1.tGyr() - s0.tGyr()) >= 0) {
+                    continue;
+                }
+                j = merger == null ? -1 : s1.indexOf(merger.members().get(0));
+                if (j < 0) {
+                    continue;
+                }
+            }
+            names[shownCount] = name;
+            int c = order.indexOf(name);
+            colour[shownCount] = c >= 0 ? c : g;
+            if (s1 == s0) {
+                gx[shownCount] = s0.positionKpc()[0][g];
+                gy[shownCount] = s0.positionKpc()[1][g];
+                gz[shownCount] = s0.positionKpc()[2][g];
+            } else {
+                gx[shownCount] = coordinate(s0, g, s1, j, 0, t, k);
+                gy[shownCount] = coordinate(s0, g, s1, j, 1, t, k);
+                gz[shownCount] = coordinate(s0, g, s1, j, 2, t, k);
+            }
+            shownCount++;
+        }
+        frame.setGalaxies(shownCount, names, colour, gx, gy, gz);
+        for (int g = 0; g < shownCount; g++) {
+            setTrail(g, t);
+        }
+    }
+
+    private static double coordinate(Snapshot s0, int g, Snapshot s1, int j, int axis, double t, double k) {
+        return SnapshotInterpolation.hermite(s0.tGyr(), s0.positionKpc()[axis][g], s0.velocityKms()[axis][g] * k,
+                s1.tGyr(), s1.positionKpc()[axis][j], s1.velocityKms()[axis][j] * k, t);
+    }
+
+    /** The merger that took {@code name} away between two snapshot times, or null. */
+    private FateEvent mergerOf(String name, double t0, double t1) {
+        double lo = Math.min(t0, t1);
+        double hi = Math.max(t0, t1);
+        for (FateEvent e : run.events()) {
+            if (e.kind() == FateKind.MERGED && e.tGyr() >= lo && e.tGyr() <= hi
+                    && e.members().indexOf(name) > 0) {
+                return e;
+            }
+        }
+        return null;
+    }
+
+    private double[][] trailT = new double[0][];
+    private double[][] trailX = new double[0][];
+    private double[][] trailY = new double[0][];
+    private double[][] trailZ = new double[0][];
+
+    private void setTrail(int g, double t) {
+        double[][] track = run.track(names[g]);
+        if (track == null) {
+            return;
+        }
+        int saved = track[0].length;
+        if (trailT[g] == null || trailT[g].length < saved + 1) {
+            trailT[g] = new double[saved + 1];
+            trailX[g] = new double[saved + 1];
+            trailY[g] = new double[saved + 1];
+            trailZ[g] = new double[saved + 1];
+        }
+        double dir = run.lastGyr() >= run.firstGyr() ? 1 : -1;
+        int m = 0;
+        while (m < saved && (track[0][m] - t) * dir < 0) {
+            m++;
+        }
+        System.arraycopy(track[0], 0, trailT[g], 0, m);
+        System.arraycopy(track[1], 0, trailX[g], 0, m);
+        System.arraycopy(track[2], 0, trailY[g], 0, m);
+        System.arraycopy(track[3], 0, trailZ[g], 0, m);
+        trailT[g][m] = t;
+        trailX[g][m] = frame.galaxyX(g);
+        trailY[g][m] = frame.galaxyY(g);
+        trailZ[g][m] = frame.galaxyZ(g);
+        frame.setTrail(g, m + 1, trailT[g], trailX[g], trailY[g], trailZ[g]);
+    }
+
+    private void fillTracers(Snapshot s0, Snapshot s1, double t) {
+        int m = s0.tracerCount();
+        if (tx.length < m) {
+            tx = new float[m];
+            ty = new float[m];
+            tz = new float[m];
+        }
+        if (s1 == s0 || s1.tracerCount() != m) {
+            System.arraycopy(s0.tracerKpc()[0], 0, tx, 0, m);
+            System.arraycopy(s0.tracerKpc()[1], 0, ty, 0, m);
+            System.arraycopy(s0.tracerKpc()[2], 0, tz, 0, m);
+        } else {
+            double k = Units.KMS_TO_KPC_PER_GYR;
+            float[][] p0 = s0.tracerKpc();
+            float[][] v0 = s0.tracerKms();
+            float[][] p1 = s1.tracerKpc();
+            float[][] v1 = s1.tracerKms();
+            SnapshotInterpolation.hermite(s0.tGyr(), p0[0], v0[0], s1.tGyr(), p1[0], v1[0], t, k, m, tx);
+            SnapshotInterpolation.hermite(s0.tGyr(), p0[1], v0[1], s1.tGyr(), p1[1], v1[1], t, k, m, ty);
+            SnapshotInterpolation.hermite(s0.tGyr(), p0[2], v0[2], s1.tGyr(), p1[2], v1[2], t, k, m, tz);
+        }
+        frame.setTracers(m, tx, ty, tz, s0.tracerHost());
+    }
+
+    private void ensureGalaxies(int n) {
+        if (names.length < n) {
+            names = new String[n];
+            colour = new int[n];
+            gx = new double[n];
+            gy = new double[n];
+            gz = new double[n];
+            trailT = new double[n][];
+            trailX = new double[n][];
+            trailY = new double[n][];
+            trailZ = new double[n][];
+        }
+    }
+
+    /** A camera distance that shows every galaxy at the start: 2.5 times the farthest, at least 100 kpc. */
+    public double overviewDistanceKpc() {
+        SceneFrame f = at(run.firstGyr());
+        double far = 0;
+        for (int g = 0; g < f.galaxyCount(); g++) {
+            far = Math.max(far, Math.sqrt(f.galaxyX(g) * f.galaxyX(g) + f.galaxyY(g) * f.galaxyY(g)
+                    + f.galaxyZ(g) * f.galaxyZ(g)));
+        }
+        return Math.max(100, 2.5 * far);
+    }
+}

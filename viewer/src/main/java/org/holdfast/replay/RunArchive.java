@@ -1,0 +1,317 @@
+package org.holdfast.replay;
+
+import java.io.IOException;
+import java.io.Reader;
+import java.nio.file.DirectoryStream;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+
+import org.apache.commons.csv.CSVFormat;
+import org.apache.commons.csv.CSVParser;
+import org.apache.commons.csv.CSVRecord;
+import org.holdfast.output.RunFolder;
+import org.holdfast.output.SnapshotWriter;
+import org.holdfast.output.TrackWriter;
+import org.holdfast.render.FateEvent;
+import org.holdfast.render.FateKind;
+import org.holdfast.scenario.ScenarioException;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+
+import io.jhdf.HdfFile;
+import io.jhdf.api.Attribute;
+
+/**
+ * A finished run folder, opened for replay: the times of its snapshots (read from each file's
+ * {@code t_gyr} attribute), the galaxies' saved paths from {@code tracks.csv} (for trails), and
+ * the fate events and rip time from {@code summary.json}. Snapshots are loaded on demand and the
+ * two most recent are kept, which is all a film moving through time needs.
+ */
+public final class RunArchive {
+
+    private final Path dir;
+    private final Path[] files;
+    private final double[] times;
+    private final List<String> initialNames;
+    private final List<FateEvent> events;
+    private final double ripGyr;
+    private final boolean stoppedBeforeRip;
+    private final Map<String, double[][]> tracks;
+    private final Snapshot[] cache = new Snapshot[2];
+    private final int[] cached = {-1, -1};
+    private int nextSlot;
+
+    private RunArchive(Path dir, Path[] files, double[] times, List<String> initialNames, List<FateEvent> events,
+            double ripGyr, boolean stoppedBeforeRip, Map<String, double[][]> tracks) {
+        this.dir = dir;
+        this.files = files;
+        this.times = times;
+        this.initialNames = initialNames;
+        this.events = events;
+        this.ripGyr = ripGyr;
+        this.stoppedBeforeRip = stoppedBeforeRip;
+        this.tracks = tracks;
+    }
+
+    /**
+     * Opens a run folder written by {@code holdfast evolve}.
+     *
+     * @throws ScenarioException naming the folder (or file) when it is not a usable run
+     */
+    public static RunArchive open(Path dir) {
+        if (!Files.isDirectory(dir)) {
+            throw new ScenarioException(dir.toString(), null, "not a run folder");
+        }
+        List<Path> found = snapshotFiles(dir);
+        if (found.isEmpty()) {
+            throw new ScenarioException(dir.toString(), null, "no snapshots (" + SnapshotWriter.FOLDER
+                    + "/state_*.h5) in this folder; make a run folder with holdfast evolve");
+        }
+        Path[] files = found.toArray(Path[]::new);
+        double[] times = new double[files.length];
+        List<String> names = List.of();
+        for (int i = 0; i < files.length; i++) {
+            try (HdfFile h = new HdfFile(files[i])) {
+                times[i] = number(h.getAttribute("t_gyr"), files[i], "t_gyr");
+                if (i == 0) {
+                    names = initialNames(h);
+                }
+            } catch (ScenarioException e) {
+                throw e;
+            } catch (RuntimeException e) {
+                throw new ScenarioException(files[i].toString(), null, "not a readable snapshot: " + e.getMessage());
+            }
+            if (i > 0 && !((times[i] - times[i - 1]) * (times[1] - times[0]) > 0)) {
+                throw new ScenarioException(files[i].toString(), "t_gyr", "snapshot times are not in order");
+            }
+        }
+        Path summary = dir.resolve(RunFolder.SUMMARY);
+        List<FateEvent> events = new ArrayList<>();
+        double rip = Double.NaN;
+        boolean beforeRip = false;
+        if (Files.isRegularFile(summary)) {
+            try {
+                JsonNode root = new ObjectMapper().readTree(summary.toFile());
+                for (JsonNode e : root.path("events")) {
+                    FateKind kind = kind(e.path("kind").asText());
+                    List<String> members = new ArrayList<>();
+                    e.path("members").forEach(m -> members.add(m.asText()));
+                    if (kind != null && !members.isEmpty() && e.path("t_gyr").isNumber()) {
+                        events.add(new FateEvent(e.path("t_gyr").asDouble(), kind, members));
+                    }
+                }
+                JsonNode r = root.path("cosmology").path("rip_gyr");
+                rip = r.isNumber() ? r.asDouble() : Double.NaN;
+                beforeRip = "before_rip".equals(root.path("stop_reason").asText());
+            } catch (IOException e) {
+                throw new ScenarioException(summary.toString(), null, "not readable JSON: " + e.getMessage());
+            }
+        }
+        events.sort((a, b) -> Double.compare(a.tGyr(), b.tGyr()));
+        return new RunArchive(dir, files, times, names, List.copyOf(events), rip, beforeRip, readTracks(dir));
+    }
+
+    private static List<Path> snapshotFiles(Path dir) {
+        Path snaps = dir.resolve(SnapshotWriter.FOLDER);
+        List<Path> out = new ArrayList<>();
+        if (!Files.isDirectory(snaps)) {
+            return out;
+        }
+        try (DirectoryStream<Path> s = Files.newDirectoryStream(snaps, "state_[0-9]*.h5")) {
+            s.forEach(out::add);
+        } catch (IOException e) {
+            throw new ScenarioException(snaps.toString(), null, "cannot list snapshots: " + e.getMessage());
+        }
+        out.sort(null);
+        return out;
+    }
+
+    private static List<String> initialNames(HdfFile h) {
+        Attribute a = h.getAttribute("initial_galaxies");
+        if (a != null && a.getData() instanceof String s && !s.isEmpty()) {
+            return List.of(s.split(","));
+        }
+        return List.of((String[]) h.getDatasetByPath("galaxies/name").getData());
+    }
+
+    private static double number(Attribute a, Path file, String key) {
+        if (a == null) {
+            throw new ScenarioException(file.toString(), key, "missing attribute");
+        }
+        Object v = a.getData();
+        if (v instanceof Number n) {
+            return n.doubleValue();
+        }
+        if (v instanceof double[] d && d.length == 1) {
+            return d[0];
+        }
+        throw new ScenarioException(file.toString(), key, "expected a number, got " + v);
+    }
+
+    private static FateKind kind(String key) {
+        return switch (key) {
+            case "merged" -> FateKind.MERGED;
+            case "escaped" -> FateKind.ESCAPED;
+            case "ripped" -> FateKind.RIPPED;
+            default -> null;
+        };
+    }
+
+    /** Saved centre paths per galaxy name: rows t, x, y, z; empty when there is no tracks.csv. */
+    private static Map<String, double[][]> readTracks(Path dir) {
+        Path file = dir.resolve(TrackWriter.FILE);
+        Map<String, List<double[]>> rows = new LinkedHashMap<>();
+        if (Files.isRegularFile(file)) {
+            CSVFormat f = CSVFormat.DEFAULT.builder().setHeader().setSkipHeaderRecord(true).get();
+            try (Reader r = Files.newBufferedReader(file); CSVParser p = CSVParser.parse(r, f)) {
+                for (CSVRecord rec : p) {
+                    rows.computeIfAbsent(rec.get("name"), k -> new ArrayList<>()).add(new double[] {
+                        Double.parseDouble(rec.get("t_gyr")), Double.parseDouble(rec.get("x_kpc")),
+                        Double.parseDouble(rec.get("y_kpc")), Double.parseDouble(rec.get("z_kpc"))});
+                }
+            } catch (IOException | RuntimeException e) {
+                throw new ScenarioException(file.toString(), null, "cannot read the tracks: " + e.getMessage());
+            }
+        }
+        Map<String, double[][]> out = new LinkedHashMap<>();
+        rows.forEach((name, list) -> {
+            double[][] a = new double[4][list.size()];
+            for (int k = 0; k < list.size(); k++) {
+                for (int c = 0; c < 4; c++) {
+                    a[c][k] = list.get(k)[c];
+                }
+            }
+            out.put(name, a);
+        });
+        return out;
+    }
+
+    public Path dir() {
+        return dir;
+    }
+
+    /** Number of snapshots. */
+    public int snapshotCount() {
+        return files.length;
+    }
+
+    /** Time of snapshot i, Gyr. */
+    public double timeOf(int i) {
+        return times[i];
+    }
+
+    /** Time of the first snapshot (the run's start), Gyr. */
+    public double firstGyr() {
+        return times[0];
+    }
+
+    /** Time of the last snapshot (where the run stopped), Gyr. */
+    public double lastGyr() {
+        return times[times.length - 1];
+    }
+
+    /** Earliest of the first and last snapshot times. */
+    public double earliestGyr() {
+        return Math.min(firstGyr(), lastGyr());
+    }
+
+    /** Latest of the first and last snapshot times. */
+    public double latestGyr() {
+        return Math.max(firstGyr(), lastGyr());
+    }
+
+    /** The galaxies at the start, in order; a galaxy's colour is its index here. */
+    public List<String> initialNames() {
+        return initialNames;
+    }
+
+    /** Fate events from the summary, oldest first (empty when there is no summary). */
+    public List<FateEvent> events() {
+        return events;
+    }
+
+    /** The big rip of the run's universe, Gyr; NaN when there is none. */
+    public double ripGyr() {
+        return ripGyr;
+    }
+
+    /** Whether the run stopped because the rip was near. */
+    public boolean stoppedBeforeRip() {
+        return stoppedBeforeRip;
+    }
+
+    /** Saved path of one galaxy: rows t, x, y, z (null when unknown). */
+    double[][] track(String name) {
+        return tracks.get(name);
+    }
+
+    /** The index of the last snapshot at or before t in the run's direction, clamped to [0, n - 2]. */
+    int bracket(double tGyr) {
+        int n = times.length;
+        if (n == 1) {
+            return 0;
+        }
+        double dir = Math.signum(times[1] - times[0]);
+        int lo = 0;
+        int hi = n - 1;
+        while (hi - lo > 1) {
+            int mid = (lo + hi) >>> 1;
+            if ((times[mid] - tGyr) * dir <= 0) {
+                lo = mid;
+            } else {
+                hi = mid;
+            }
+        }
+        return Math.min(lo, n - 2);
+    }
+
+    /** Snapshot i, loaded (the two most recently used are kept). */
+    Snapshot snapshot(int i) {
+        for (int s = 0; s < 2; s++) {
+            if (cached[s] == i) {
+                return cache[s];
+            }
+        }
+        Snapshot snap = load(files[i]);
+        int slot = nextSlot;
+        nextSlot = 1 - nextSlot;
+        cache[slot] = snap;
+        cached[slot] = i;
+        return snap;
+    }
+
+    private static Snapshot load(Path file) {
+        try (HdfFile h = new HdfFile(file)) {
+            double t = number(h.getAttribute("t_gyr"), file, "t_gyr");
+            double a = number(h.getAttribute("scale_factor"), file, "scale_factor");
+            String[] names = (String[]) h.getDatasetByPath("galaxies/name").getData();
+            double[][] pos = (double[][]) h.getDatasetByPath("galaxies/position_kpc").getData();
+            double[][] vel = (double[][]) h.getDatasetByPath("galaxies/velocity_kms").getData();
+            float[][] tp = new float[3][0];
+            float[][] tv = new float[3][0];
+            int[] host = new int[0];
+            if (h.getChild("tracers") != null) {
+                tp = (float[][]) h.getDatasetByPath("tracers/position_kpc").getData();
+                tv = (float[][]) h.getDatasetByPath("tracers/velocity_kms").getData();
+                host = (int[]) h.getDatasetByPath("tracers/host").getData();
+            }
+            return new Snapshot(t, a, names, pos, vel, tp, tv, host);
+        } catch (ScenarioException e) {
+            throw e;
+        } catch (RuntimeException e) {
+            throw new ScenarioException(file.toString(), null, "not a readable snapshot: " + e.getMessage());
+        }
+    }
+
+    @Override
+    public String toString() {
+        return String.format(Locale.ROOT, "%s: %d snapshots, %.4g to %.4g Gyr", dir, files.length, firstGyr(),
+                lastGyr());
+    }
+}

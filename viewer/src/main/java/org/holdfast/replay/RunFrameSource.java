@@ -1,0 +1,173 @@
+package org.holdfast.replay;
+
+import java.awt.Color;
+import java.awt.Font;
+import java.awt.FontMetrics;
+import java.awt.Graphics2D;
+import java.awt.RenderingHints;
+import java.awt.image.BufferedImage;
+import java.util.Arrays;
+import java.util.List;
+
+import org.holdfast.render.CameraPose;
+import org.holdfast.render.FateEvent;
+import org.holdfast.render.FrameRenderer;
+import org.holdfast.render.Overlay;
+import org.holdfast.render.RenderSettings;
+import org.holdfast.render.projection.DomeProjection;
+import org.holdfast.render.projection.FlatProjection;
+import org.holdfast.window.Camera;
+import org.holdfast.window.FrameSource;
+import org.holdfast.window.Layer;
+import org.holdfast.window.Layers;
+import org.holdfast.window.Projection;
+import org.holdfast.window.ViewState;
+import org.holdfast.window.input.Bindings;
+import org.joml.Vector3d;
+
+/**
+ * The frames of {@code holdfast view} for a run folder: the CPU renderer draws the replayed scene
+ * from the window's orbit camera. The window's layers switch the renderer's looks: trails,
+ * star and flow tracers, names, the clock (time, scale factor and scale bar), fate events and
+ * the key list.
+ * The dome preview is a square 180-degree dome master centred in the window. Splats show their
+ * nominal brightness from the run's overview distance, as in {@code holdfast render}.
+ */
+public final class RunFrameSource implements FrameSource {
+
+    private final ReplayScene scene;
+    private final AutoCloseable owned;
+    private final CameraPose pose = new CameraPose();
+    private final double[] eventTimes;
+    private FrameRenderer renderer;
+    private String rendererKey = "";
+
+    /**
+     * @param owned closed with this source (a temporary run), or null
+     */
+    public RunFrameSource(RunArchive run, AutoCloseable owned) {
+        this.scene = new ReplayScene(run);
+        this.owned = owned;
+        this.eventTimes = run.events().stream().mapToDouble(FateEvent::tGyr).sorted().toArray();
+    }
+
+    /** The pose of the window's orbit camera: at its eye, facing its target, +z towards the top. */
+    public static CameraPose poseOf(Camera c, CameraPose dest) {
+        Vector3d eye = c.eyeKpc(new Vector3d());
+        return dest.lookAt(eye, new Vector3d(c.targetXKpc(), c.targetYKpc(), c.targetZKpc()),
+                new Vector3d(0, 0, 1), c.fovDeg());
+    }
+
+    /** The renderer's overlays for the window's layers. */
+    public static RenderSettings settingsFor(Layers layers, RenderSettings dest) {
+        dest.noOverlays();
+        dest.overlay(Overlay.NAMES, layers.has(Layer.NAMES));
+        dest.overlay(Overlay.EVENTS, layers.has(Layer.EVENTS));
+        dest.overlay(Overlay.CLOCK, layers.has(Layer.CLOCK));
+        dest.overlay(Overlay.SCALE_FACTOR, layers.has(Layer.CLOCK));
+        dest.overlay(Overlay.SCALE_BAR, layers.has(Layer.CLOCK));
+        RenderSettings defaults = new RenderSettings();
+        dest.trailBrightness(layers.has(Layer.TRAILS) ? defaults.trailBrightness() : 0);
+        dest.starBrightness(layers.has(Layer.STARS) ? defaults.starBrightness() : 0);
+        dest.flowBrightness(layers.has(Layer.TRACERS) ? defaults.flowBrightness() : 0);
+        return dest;
+    }
+
+    @Override
+    public void draw(ViewState view, int width, int height, int[] argb) {
+        Camera c = view.camera();
+        boolean dome = c.projection() == Projection.DOME;
+        int side = Math.min(width, height);
+        String key = width + "x" + height + (dome ? "dome" : "flat") + view.layers().bits();
+        if (!key.equals(rendererKey)) {
+            if (renderer != null) {
+                renderer.close();
+            }
+            RenderSettings s = settingsFor(view.layers(), new RenderSettings())
+                    .referenceDistanceKpc(scene.overviewDistanceKpc());
+            renderer = new FrameRenderer(dome ? new DomeProjection(side) : new FlatProjection(width, height, c.fovDeg()), s);
+            rendererKey = key;
+        }
+        double t = Math.max(startGyr(), Math.min(endGyr(), view.clock().tGyr()));
+        BufferedImage img = renderer.render(scene.at(t), poseOf(c, pose));
+        if (view.layers().has(Layer.HELP)) {
+            paintKeys(img);
+        }
+        if (dome) {
+            Arrays.fill(argb, 0, width * height, 0xFF000000);
+            int offset = (width - side) / 2 + (height - side) / 2 * width;
+            img.getRGB(0, 0, side, side, argb, offset, width);
+        } else {
+            img.getRGB(0, 0, width, height, argb, 0, width);
+        }
+    }
+
+    /** The key list over a darkened panel at the upper right. */
+    private static void paintKeys(BufferedImage img) {
+        List<String> lines = Bindings.helpLines();
+        Graphics2D g = img.createGraphics();
+        try {
+            g.setRenderingHint(RenderingHints.KEY_TEXT_ANTIALIASING, RenderingHints.VALUE_TEXT_ANTIALIAS_ON);
+            g.setFont(new Font(Font.SANS_SERIF, Font.PLAIN, Math.max(10, img.getHeight() / 48)));
+            FontMetrics fm = g.getFontMetrics();
+            int w = lines.stream().mapToInt(fm::stringWidth).max().orElse(0) + 2 * fm.getHeight();
+            int h = (lines.size() + 1) * fm.getHeight();
+            int x = Math.max(0, img.getWidth() - w - fm.getHeight());
+            int y = fm.getHeight();
+            g.setColor(new Color(0, 0, 0, 190));
+            g.fillRect(x, y, w, h);
+            g.setColor(new Color(0xEDE6D6));
+            for (int i = 0; i < lines.size(); i++) {
+                g.drawString(lines.get(i), x + fm.getHeight(), y + (i + 1) * fm.getHeight());
+            }
+        } finally {
+            g.dispose();
+        }
+    }
+
+    @Override
+    public double startGyr() {
+        return scene.run().earliestGyr();
+    }
+
+    @Override
+    public double endGyr() {
+        return scene.run().latestGyr();
+    }
+
+    @Override
+    public double[] eventTimesGyr() {
+        return eventTimes.clone();
+    }
+
+    @Override
+    public List<String> memberNames() {
+        return scene.run().initialNames();
+    }
+
+    @Override
+    public boolean memberCentreKpc(int index, double tGyr, double[] xyzKpc) {
+        double t = Math.max(startGyr(), Math.min(endGyr(), tGyr));
+        return scene.centreOf(memberNames().get(index), t, xyzKpc);
+    }
+
+    @Override
+    public double overviewDistanceKpc() {
+        return scene.overviewDistanceKpc();
+    }
+
+    @Override
+    public void close() {
+        if (renderer != null) {
+            renderer.close();
+            renderer = null;
+        }
+        if (owned != null) {
+            try {
+                owned.close();
+            } catch (Exception e) {
+                // nothing useful to do about a temporary folder that would not go
+            }
+        }
+    }
+}

@@ -1,0 +1,187 @@
+package org.holdfast.film;
+
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.awt.image.BufferedImage;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.nio.file.attribute.FileTime;
+
+import org.holdfast.render.FrameFiles;
+import org.holdfast.replay.DemoRun;
+import org.holdfast.window.ViewRun;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/** {@code holdfast render} on the cut-down demo run: frames, restarts, threads, the looks. */
+class RenderCommandTest {
+
+    @TempDir
+    Path dir;
+
+    private static String run() {
+        return DemoRun.folder().toString();
+    }
+
+    private ViewRun.Result demoFilm(Path out, String... more) {
+        return demoFilmSized(out, "64x36", more);
+    }
+
+    private ViewRun.Result demoFilmSized(Path out, String size, String... more) {
+        String[] base = {run(), "--film", DemoRun.FILM.toString(), "--size", size, "--fps", "4", "--seconds", "1",
+            "--to-gyr", "2", "--out", out.toString(), "--quiet"};
+        String[] all = new String[base.length + more.length];
+        System.arraycopy(base, 0, all, 0, base.length);
+        System.arraycopy(more, 0, all, base.length, more.length);
+        return FilmRun.render(all);
+    }
+
+    @Test
+    void theDemoFilmRendersAtTinySize() throws Exception {
+        Path out = dir.resolve("frames");
+        ViewRun.Result r = demoFilm(out);
+        assertEquals(0, r.exitCode(), r.err());
+        for (int i = 1; i <= 4; i++) {
+            BufferedImage img = FilmRun.image(out.resolve(FrameFiles.name(i)));
+            assertEquals(64, img.getWidth());
+            assertEquals(36, img.getHeight());
+            assertTrue(FilmRun.litPixels(img) > 20, "frame " + i + " shows the group");
+        }
+        assertFalse(Files.exists(out.resolve(FrameFiles.name(5))), "1 s at 4 frames per second is 4 frames");
+        assertTrue(Files.isRegularFile(out.resolve(FilmManifest.FILE)));
+        // The camera circles and the clock runs: the first and last frames differ.
+        assertTrue(FilmRun.maxDifference(FilmRun.image(out.resolve(FrameFiles.name(1))),
+                FilmRun.image(out.resolve(FrameFiles.name(4)))) > 50);
+    }
+
+    @Test
+    void aRestartSkipsFinishedFramesAndRedrawsMissingOnesIdentically() throws Exception {
+        Path out = dir.resolve("frames");
+        assertEquals(0, demoFilm(out).exitCode());
+        byte[] second = Files.readAllBytes(out.resolve(FrameFiles.name(2)));
+        Files.delete(out.resolve(FrameFiles.name(2)));
+        FileTime old = FileTime.fromMillis(86_400_000L);
+        Files.setLastModifiedTime(out.resolve(FrameFiles.name(1)), old);
+        ViewRun.Result r = FilmRun.render(run(), "--film", DemoRun.FILM.toString(), "--size", "64x36", "--fps", "4",
+                "--seconds", "1", "--to-gyr", "2", "--out", out.toString());
+        assertEquals(0, r.exitCode(), r.err());
+        assertTrue(r.out().contains("1 frames drawn, 3 already there"), r.out());
+        assertArrayEquals(second, Files.readAllBytes(out.resolve(FrameFiles.name(2))));
+        assertEquals(old, Files.getLastModifiedTime(out.resolve(FrameFiles.name(1))), "frame 1 was not redrawn");
+    }
+
+    @Test
+    void aFolderOfAnotherFilmIsNotMixedWithThisOne() throws Exception {
+        Path out = dir.resolve("frames");
+        assertEquals(0, demoFilm(out).exitCode());
+        byte[] first = Files.readAllBytes(out.resolve(FrameFiles.name(1)));
+        ViewRun.Result r = FilmRun.render(run(), "--film", DemoRun.FILM.toString(), "--size", "32x18", "--fps", "4",
+                "--seconds", "1", "--to-gyr", "2", "--out", out.toString());
+        assertOneLine(r, "--out", "different film");
+        assertArrayEquals(first, Files.readAllBytes(out.resolve(FrameFiles.name(1))));
+    }
+
+    @Test
+    void framesAreByteIdenticalOnOneThreadAndOnTwo() throws Exception {
+        for (String view : new String[] {"flat", "dome"}) {
+            String size = "flat".equals(view) ? "64x36" : "48";
+            Path one = dir.resolve(view + "-1");
+            Path two = dir.resolve(view + "-2");
+            assertEquals(0, demoFilmSized(one, size, "--projection", view, "--threads", "1").exitCode());
+            assertEquals(0, demoFilmSized(two, size, "--projection", view, "--threads", "2").exitCode());
+            for (int i = 1; i <= 4; i++) {
+                assertArrayEquals(Files.readAllBytes(one.resolve(FrameFiles.name(i))),
+                        Files.readAllBytes(two.resolve(FrameFiles.name(i))), view + " frame " + i);
+            }
+        }
+    }
+
+    @Test
+    void domeAndPanoramaFramesHaveTheirShapes() throws Exception {
+        Path dome = dir.resolve("dome");
+        assertEquals(0, demoFilmSized(dome, "48", "--projection", "dome").exitCode());
+        BufferedImage d = FilmRun.image(dome.resolve(FrameFiles.name(1)));
+        assertEquals(48, d.getWidth());
+        assertEquals(48, d.getHeight());
+        assertTrue(FilmRun.litPixels(d) > 20);
+        Path pano = dir.resolve("pano");
+        assertEquals(0, demoFilmSized(pano, "96x48", "--projection", "panorama").exitCode());
+        BufferedImage p = FilmRun.image(pano.resolve(FrameFiles.name(1)));
+        assertEquals(96, p.getWidth());
+        assertEquals(48, p.getHeight());
+        assertTrue(FilmRun.litPixels(p) > 20);
+    }
+
+    @Test
+    void withoutAFilmTableARunGetsTheDefaultFilmOverTheWholeRun() throws Exception {
+        Path out = dir.resolve("default");
+        ViewRun.Result r = FilmRun.render(run(), "--size", "32x18", "--seconds", "0.5", "--fps", "4", "--out",
+                out.toString());
+        assertEquals(0, r.exitCode(), r.err());
+        assertTrue(r.out().contains("rendering 2 frames (32x18 flat, 4 per second, 0 to 1 Gyr)"), r.out());
+        assertTrue(Files.isRegularFile(out.resolve(FrameFiles.name(2))));
+        String manifest = Files.readString(out.resolve(FilmManifest.FILE));
+        assertTrue(manifest.contains("\"first_gyr\" : 0.0"), manifest);
+    }
+
+    @Test
+    void aVideoIsEncodedWhenFfmpegIsThere() throws Exception {
+        org.junit.jupiter.api.Assumptions.assumeTrue(VideoEncoder.ffmpeg().isPresent(),
+                "ffmpeg is not on the PATH: video encoding not tested");
+        Path out = dir.resolve("frames");
+        Path video = dir.resolve("demo.mp4");
+        ViewRun.Result r = demoFilm(out, "--video", video.toString());
+        assertEquals(0, r.exitCode(), r.err());
+        byte[] head = java.util.Arrays.copyOf(Files.readAllBytes(video), 8);
+        // An MP4 file starts with its 'ftyp' box (ISO/IEC 14496-12, section 4.3).
+        assertEquals("ftyp", new String(head, 4, 4, java.nio.charset.StandardCharsets.US_ASCII));
+        try (var files = Files.list(dir)) {
+            assertEquals(0, files.filter(f -> f.getFileName().toString().endsWith(".part")).count());
+        }
+    }
+
+    @Test
+    void aScenarioIsEvolvedFirstAndItsTemporaryRunRemoved() throws Exception {
+        Path tmp = Path.of(System.getProperty("java.io.tmpdir"));
+        long before = countTemporaryRuns(tmp);
+        Path still = dir.resolve("scenario-still.png");
+        java.util.List<String> args = new java.util.ArrayList<>(java.util.List.of(DemoRun.SCENARIO.toString(),
+                "--still", "1", "--size", "32x18", "--out", still.toString(), "--quiet"));
+        for (String s : DemoRun.cutDown(500)) {
+            args.add("--set");
+            args.add(s);
+        }
+        ViewRun.Result r = FilmRun.render(args.toArray(String[]::new));
+        assertEquals(0, r.exitCode(), r.err());
+        assertEquals(32, FilmRun.image(still).getWidth());
+        assertEquals(before, countTemporaryRuns(tmp), "the temporary run folder is gone");
+    }
+
+    private static long countTemporaryRuns(Path tmp) throws java.io.IOException {
+        try (var s = Files.list(tmp)) {
+            return s.filter(p -> p.getFileName().toString().startsWith("holdfast-run-")).count();
+        }
+    }
+
+    @Test
+    void theHelpFitsEightyColumns() {
+        ViewRun.Result r = FilmRun.render("--help");
+        assertEquals(0, r.exitCode(), r.err());
+        assertTrue(r.out().contains("--still"), r.out());
+        r.out().lines().forEach(l -> assertTrue(l.length() <= 80, "too wide: " + l));
+    }
+
+    static void assertOneLine(ViewRun.Result r, String... parts) {
+        assertEquals(2, r.exitCode(), r.out() + r.err());
+        String err = r.err().strip();
+        assertFalse(err.contains("\n"), "one line: " + err);
+        assertFalse(err.contains("Exception"), err);
+        assertTrue(err.startsWith("holdfast render: "), err);
+        for (String p : parts) {
+            assertTrue(err.contains(p), "'" + p + "' in: " + err);
+        }
+    }
+}
