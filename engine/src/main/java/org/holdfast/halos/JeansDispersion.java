@@ -16,7 +16,7 @@ import org.holdfast.units.Units;
  */
 public final class JeansDispersion {
 
-    private static final int POINTS = 1200;
+    private static final int POINTS = 4000;
     private static final double INNER = 1e-5;
     private static final double OUTER = 1e4;
 

@@ -370,6 +370,11 @@ public final class Simulation implements RunView, AutoCloseable {
         }
     }
 
+    /** The system being stepped (for tests in this package). */
+    GroupSystem system() {
+        return system;
+    }
+
     /** The integrator in use. */
     public Integrator integrator() {
         return integrator;
