@@ -158,7 +158,8 @@ public final class Simulation implements RunView, AutoCloseable {
             }
             integrator.step(system, h);
             steps++;
-            boolean onTarget = h == target - (system.time() - h) || Math.abs(system.time() - target) <= 1e-12 * Math.abs(h);
+            boolean onTarget = h == target - (system.time() - h) || Math.abs(system.time() - target) <= 1e-12 * Math.abs(h)
+                    || Math.abs(system.time() - target) <= 4 * Math.ulp(target);
             if (onTarget) {
                 system.setTime(target);
             }
