@@ -28,7 +28,8 @@ import picocli.CommandLine.Spec;
             ExpansionCommand.class,
             EvolveCommand.class,
             ValidateCommand.class,
-            BenchCommand.class
+            BenchCommand.class,
+            TimingCommand.class
         })
 public final class Holdfast implements Runnable {
 
