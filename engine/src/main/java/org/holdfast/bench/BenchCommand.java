@@ -17,6 +17,7 @@ import picocli.CommandLine.Model.CommandSpec;
 /** {@code holdfast bench}: runs every registered {@link BenchSuite} and reports the figures. */
 @Command(name = "bench",
         mixinStandardHelpOptions = true,
+        header = "Measure the hot paths against their targets.",
         description = {
             "Measures the speed of the hot paths and prints the figures with their targets.",
             "",
@@ -36,6 +37,32 @@ public final class BenchCommand implements Callable<Integer> {
 
     @Spec
     CommandSpec spec;
+
+    private static final java.util.regex.Pattern LEADING_NUMBER =
+            java.util.regex.Pattern.compile("^\\s*([-+]?[0-9]*\\.?[0-9]+(?:[eE][-+]?[0-9]+)?)(.*)$");
+
+    /**
+     * For JSON, a figure that a suite gave as text ("15.2 frames/s (target >= 20: met)") becomes
+     * its number under the key and the whole text under {@code KEY_note}, so that tools read
+     * numbers.
+     */
+    static Map<String, Object> numeric(Map<String, Object> results) {
+        Map<String, Object> out = new LinkedHashMap<>();
+        results.forEach((k, v) -> {
+            if (v instanceof String text) {
+                java.util.regex.Matcher m = LEADING_NUMBER.matcher(text);
+                if (m.matches()) {
+                    out.put(k, Double.parseDouble(m.group(1)));
+                    if (!m.group(2).isBlank()) {
+                        out.put(k + "_note", text);
+                    }
+                    return;
+                }
+            }
+            out.put(k, v);
+        });
+        return out;
+    }
 
     @Override
     public Integer call() throws Exception {
@@ -66,7 +93,8 @@ public final class BenchCommand implements Callable<Integer> {
                     "no benchmark suite named '" + only + "'");
         }
         if (json) {
-            out.println(new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT).writeValueAsString(results));
+            out.println(new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT)
+                    .writeValueAsString(numeric(results)));
         }
         out.flush();
         return 0;

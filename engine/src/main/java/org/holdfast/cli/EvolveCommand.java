@@ -35,6 +35,7 @@ import picocli.CommandLine.Model.CommandSpec;
 /** {@code holdfast evolve}: runs a scenario, decides the fates, writes a run folder. */
 @Command(name = "evolve",
         mixinStandardHelpOptions = true,
+        header = "Evolve a group, decide every member's fate, write a run folder.",
         description = {
             "Evolves a galaxy group forward (or backward) in its expanding universe, says for",
             "each member whether and when it stays bound, merges, escapes or is ripped away,",

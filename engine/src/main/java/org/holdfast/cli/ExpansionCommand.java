@@ -35,6 +35,7 @@ import picocli.CommandLine.Spec;
 /** {@code holdfast expansion}: the expansion history of one cosmology, as a table, JSON or a plot. */
 @Command(name = "expansion",
         mixinStandardHelpOptions = true,
+        header = "The expansion history of one universe: age, rip or crunch, a, H, k.",
         description = {
             "Solves the expansion of the universe for one cosmology and prints its landmarks (age,",
             "big rip or crunch, Hubble time, dark-energy density, q0, onset of acceleration) and",

@@ -17,17 +17,21 @@ import picocli.CommandLine.Spec;
         mixinStandardHelpOptions = true,
         versionProvider = Version.class,
         description = {
-            "Galaxy groups against dark energy: evolve a group in an expanding universe, decide",
-            "who stays bound, merges, escapes or is ripped away, sweep parameters, film it.",
+            "Galaxy groups against dark energy: evolve a group in an expanding universe, decide who",
+            "stays bound, merges, escapes or is ripped away, sweep parameters, watch and film it.",
             "",
             "Example:",
-            "  holdfast expansion scenarios/lambda-steady.toml"
+            "  holdfast evolve scenarios/hollin-group.toml"
         },
         subcommands = {
             CommandLine.HelpCommand.class,
             ExpansionCommand.class,
-            EvolveCommand.class,
             ValidateCommand.class,
+            EvolveCommand.class,
+            SweepCommand.class,
+            SweepMergeCommand.class,
+            ThresholdCommand.class,
+            NewCommand.class,
             BenchCommand.class,
             TimingCommand.class
         })
@@ -53,6 +57,7 @@ public final class Holdfast implements Runnable {
         cl.setExecutionExceptionHandler(Holdfast::handleFailure);
         cl.setParameterExceptionHandler(Holdfast::handleBadOption);
         cl.setCaseInsensitiveEnumValuesAllowed(true);
+        cl.setUsageHelpWidth(100);
         return cl;
     }
 

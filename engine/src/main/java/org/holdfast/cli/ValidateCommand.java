@@ -25,6 +25,7 @@ import picocli.CommandLine.Model.CommandSpec;
 /** {@code holdfast validate}: reads and checks a scenario without running it. */
 @Command(name = "validate",
         mixinStandardHelpOptions = true,
+        header = "Check a scenario and show its members in the centre-of-mass frame.",
         description = {
             "Reads and checks a scenario without running it, and shows the members as the run",
             "would start them: in the group's centre-of-mass frame.",

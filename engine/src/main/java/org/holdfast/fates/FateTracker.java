@@ -114,13 +114,7 @@ public final class FateTracker implements RunObserver {
         double[][] x = {run.bodyX(), run.bodyY(), run.bodyZ()};
         double[][] v = {run.bodyVx(), run.bodyVy(), run.bodyVz()};
         Subgroups s = Subgroups.find(n, m, x, v, k(t));
-        int heaviest = 0;
-        for (int i = 1; i < n; i++) {
-            if (m[i] > m[heaviest]) {
-                heaviest = i;
-            }
-        }
-        int[] main = s.membersWith(heaviest);
+        int[] main = s.mainGroup(m);
         boolean[] isMain = new boolean[n];
         for (int i : main) {
             isMain[i] = true;

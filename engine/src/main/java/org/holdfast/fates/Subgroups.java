@@ -93,6 +93,22 @@ public final class Subgroups {
         return new Subgroups(groupOf, List.copyOf(joins));
     }
 
+    /** Index of the heaviest body: the main group is the subgroup it belongs to. */
+    public static int heaviest(int n, double[] mass) {
+        int h = 0;
+        for (int i = 1; i < n; i++) {
+            if (mass[i] > mass[h]) {
+                h = i;
+            }
+        }
+        return h;
+    }
+
+    /** Members of the main group: the subgroup of the heaviest body. */
+    public int[] mainGroup(double[] mass) {
+        return membersWith(heaviest(groupOf.length, mass));
+    }
+
     /** Subgroup index of body i (0-based, arbitrary order). */
     public int groupOf(int i) {
         return groupOf[i];

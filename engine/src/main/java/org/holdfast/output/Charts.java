@@ -50,6 +50,9 @@ public final class Charts {
         s.setMarkerSize(0);
         s.setAntiAlias(true);
         s.setChartTitleBoxVisible(false);
+        s.setAnnotationTextFont(TICKS);
+        s.setAnnotationTextFontColor(Palette.INK);
+        s.setAnnotationLineColor(Palette.GUIDE);
         return chart;
     }
 
@@ -80,6 +83,37 @@ public final class Charts {
         s.setMarker(SeriesMarkers.CIRCLE);
         chart.getStyler().setMarkerSize(size);
         return s;
+    }
+
+    /** Writes several charts side by side as one PNG, to a temporary name first. */
+    public static void savePng(Path file, XYChart... charts) {
+        int w = 0;
+        int h = 0;
+        java.awt.image.BufferedImage[] parts = new java.awt.image.BufferedImage[charts.length];
+        for (int i = 0; i < charts.length; i++) {
+            parts[i] = BitmapEncoder.getBufferedImage(charts[i]);
+            w += parts[i].getWidth();
+            h = Math.max(h, parts[i].getHeight());
+        }
+        java.awt.image.BufferedImage all = new java.awt.image.BufferedImage(w, h, java.awt.image.BufferedImage.TYPE_INT_RGB);
+        java.awt.Graphics2D g = all.createGraphics();
+        g.setColor(Palette.PAPER);
+        g.fillRect(0, 0, w, h);
+        int x = 0;
+        for (java.awt.image.BufferedImage p : parts) {
+            g.drawImage(p, x, 0, null);
+            x += p.getWidth();
+        }
+        g.dispose();
+        try {
+            Path dir = file.toAbsolutePath().getParent();
+            Files.createDirectories(dir);
+            Path tmp = dir.resolve(file.getFileName() + ".part");
+            javax.imageio.ImageIO.write(all, "png", tmp.toFile());
+            Files.move(tmp, file, StandardCopyOption.REPLACE_EXISTING);
+        } catch (IOException e) {
+            throw new UncheckedIOException("cannot write " + file, e);
+        }
     }
 
     /** Writes the chart as PNG, to a temporary name first. */

@@ -3,22 +3,22 @@ package org.holdfast.output;
 import java.awt.Color;
 
 /**
- * holdfast's colours, shared by charts and films. Eight hues chosen to differ in lightness as
- * well as hue, so that neighbours stay apart for the common forms of colour blindness; the
- * first two (harbour blue and ember orange) are the pair used when only two are needed.
+ * holdfast's chart colours. Member i has the same hue here as in films (the renderer's palette
+ * for a black sky: amber, azure, citron, orchid, teal, coral, pearl, cobalt), darkened to read
+ * on paper, so that a member keeps its colour from a chart to a film frame.
  */
 public final class Palette {
 
     /** Member colours, in the order members are listed. */
     private static final int[] MEMBERS_RGB = {
-        0x2F7FB8, // harbour blue
-        0xE8891C, // ember orange
-        0x9A4FB0, // heather violet
-        0x5FB86A, // lichen green
-        0xC23B4E, // brick rose
-        0x49C3D1, // glacier cyan
-        0xD9C23F, // straw yellow
-        0x7A6A58, // driftwood
+        0xC7821A, // amber
+        0x2F7FB8, // azure
+        0xA89A1F, // citron
+        0xA4509A, // orchid
+        0x1F9A80, // teal
+        0xC9473B, // coral
+        0x6B675E, // pearl (a warm grey on paper)
+        0x2A4BB0, // cobalt
     };
 
     /** Background of charts: a warm off-white. */

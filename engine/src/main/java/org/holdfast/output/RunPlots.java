@@ -36,7 +36,7 @@ public final class RunPlots {
     }
 
     static void distances(Path file, RunRecorder rec, List<RunEvent> events, String title) {
-        XYChart c = Charts.lines(title + ": distance from the centre of mass", "time from today [Gyr]",
+        XYChart c = Charts.lines(title + ": distance from the group centre", "time from today [Gyr]",
                 "distance [kpc]", W, H);
         double[] t = rec.times();
         int colour = 0;
@@ -52,7 +52,7 @@ public final class RunPlots {
         }
         double[] zg = rec.zeroGravityKpc();
         if (hasFinite(zg)) {
-            Charts.guide(c, "zero-gravity radius", t, capped(zg, 3 * Math.max(max, 1)));
+            Charts.guide(c, "zero-gravity radius of the main group", t, capped(zg, 5 * Math.max(max, 1)));
         }
         int row = 0;
         for (RunEvent ev : events) {
@@ -80,25 +80,27 @@ public final class RunPlots {
     }
 
     static void hubble(Path file, RunRecorder rec, String title) {
-        XYChart c = Charts.lines(title + ": local Hubble diagram", "distance from the centre of mass [kpc]",
-                "radial velocity [km/s]", W, H);
-        RunRecorder.HubbleDiagram a = rec.startDiagram();
-        RunRecorder.HubbleDiagram b = rec.endDiagram();
-        String ta = String.format(java.util.Locale.ROOT, "t = %.1f Gyr", a.tGyr());
-        String tb = String.format(java.util.Locale.ROOT, "t = %.1f Gyr", b.tGyr());
-        if (a.flowR().length > 0) {
-            Charts.points(c, "flow, " + ta, a.flowR(), a.flowVr(), 5, 3);
-            Charts.points(c, "flow, " + tb, b.flowR(), b.flowVr(), 1, 3);
+        XYChart start = hubblePanel(title + ": local Hubble diagram today", rec.startDiagram());
+        XYChart end = hubblePanel(String.format(java.util.Locale.ROOT, "... and at t = %.1f Gyr",
+                rec.endDiagram().tGyr()), rec.endDiagram());
+        Charts.savePng(file, start, end);
+    }
+
+    /** One time's diagram: flow tracers, members, the zero line and the zero-velocity radius. */
+    private static XYChart hubblePanel(String title, RunRecorder.HubbleDiagram d) {
+        XYChart c = Charts.lines(title, "distance from the group centre [kpc]", "radial velocity [km/s]", W * 3 / 4, H);
+        if (d.flowR().length > 0) {
+            Charts.points(c, "flow tracers", d.flowR(), d.flowVr(), 1, 3);
         }
-        Charts.points(c, "members, " + ta, a.memberR(), a.memberVr(), 0, 5);
-        Charts.points(c, "members, " + tb, b.memberR(), b.memberVr(), 4, 5);
-        double r0 = zeroVelocityRadius(a.flowR(), a.flowVr());
+        Charts.points(c, "members", d.memberR(), d.memberVr(), 5, 6);
+        double r0 = zeroVelocityRadius(d.flowR(), d.flowVr());
         if (!Double.isNaN(r0)) {
             c.addAnnotation(new AnnotationLine(r0, true, false));
-            c.addAnnotation(new AnnotationText("zero-velocity radius (" + ta + ")", r0, 0, false));
+            c.addAnnotation(new AnnotationText(String.format(java.util.Locale.ROOT, "zero-velocity radius %.0f kpc", r0),
+                    r0, 0, false));
         }
         c.addAnnotation(new AnnotationLine(0, false, false));
-        Charts.savePng(c, file);
+        return c;
     }
 
     /**

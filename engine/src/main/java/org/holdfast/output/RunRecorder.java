@@ -7,6 +7,7 @@ import java.util.List;
 import java.util.Map;
 
 import org.holdfast.expansion.ExpansionHistory;
+import org.holdfast.fates.Subgroups;
 import org.holdfast.run.RunObserver;
 import org.holdfast.run.RunView;
 import org.holdfast.run.StopReason;
@@ -14,9 +15,10 @@ import org.holdfast.units.Units;
 
 /**
  * Keeps, at regular intervals, what the run's pictures show: each member's distance from the
- * centre of mass, the zero-gravity radius of the whole mass, the energy-budget residual; and
- * the local Hubble diagram (distance and radial velocity of members and flow tracers) at the
- * start and at the end.
+ * group centre (the centre of mass of the main bound group, which stays with the group when
+ * members escape), the zero-gravity radius of the main group's mass, the energy-budget
+ * residual; and the local Hubble diagram (distance and radial velocity of members and flow
+ * tracers around the group centre) at the start and at the end.
  */
 public final class RunRecorder implements RunObserver {
 
@@ -37,7 +39,8 @@ public final class RunRecorder implements RunObserver {
     private double[] zeroGravity = new double[256];
     private int count;
     private double last = Double.NaN;
-    private double totalMass;
+    /** The group centre at the latest record: x, y, z (kpc), vx, vy, vz (kpc/Gyr). */
+    private final double[] centre = new double[6];
     private HubbleDiagram first;
     private HubbleDiagram lastDiagram;
 
@@ -49,13 +52,11 @@ public final class RunRecorder implements RunObserver {
 
     @Override
     public void init(RunView run) {
-        totalMass = 0;
         for (int i = 0; i < run.bodyCount(); i++) {
             names.add(run.bodyName(i));
-            totalMass += run.bodyMass()[i];
         }
         record(run);
-        first = diagram(run);
+        first = diagram(run, centre);
     }
 
     @Override
@@ -70,7 +71,7 @@ public final class RunRecorder implements RunObserver {
         if (run.tGyr() != last) {
             record(run);
         }
-        lastDiagram = diagram(run);
+        lastDiagram = diagram(run, centre);
     }
 
     private void record(RunView run) {
@@ -85,17 +86,41 @@ public final class RunRecorder implements RunObserver {
         times[count] = run.tGyr();
         residual[count] = run.energyResidual();
         double k = darkEnergy ? history.darkEnergyAcceleration(run.tGyr()) : 0;
-        zeroGravity[count] = k > 0 ? Math.cbrt(Units.G * totalMass / k) : Double.NaN;
+        double mainMass = centre(run, k);
+        zeroGravity[count] = k > 0 ? Math.cbrt(Units.G * mainMass / k) : Double.NaN;
         for (String n : names) {
             distance.computeIfAbsent(n, key -> filledNaN(times.length))[count] = Double.NaN;
         }
         for (int i = 0; i < run.bodyCount(); i++) {
-            double x = run.bodyX()[i];
-            double y = run.bodyY()[i];
-            double z = run.bodyZ()[i];
+            double x = run.bodyX()[i] - centre[0];
+            double y = run.bodyY()[i] - centre[1];
+            double z = run.bodyZ()[i] - centre[2];
             distance.get(run.bodyName(i))[count] = Math.sqrt(x * x + y * y + z * z);
         }
         count++;
+    }
+
+    /** Sets {@link #centre} to the main group's centre of mass and velocity; returns its mass. */
+    private double centre(RunView run, double k) {
+        int n = run.bodyCount();
+        double[] m = run.bodyMass();
+        Subgroups s = Subgroups.find(n, m, new double[][] {run.bodyX(), run.bodyY(), run.bodyZ()},
+                new double[][] {run.bodyVx(), run.bodyVy(), run.bodyVz()}, k);
+        double mm = 0;
+        java.util.Arrays.fill(centre, 0);
+        for (int i : s.mainGroup(m)) {
+            mm += m[i];
+            centre[0] += m[i] * run.bodyX()[i];
+            centre[1] += m[i] * run.bodyY()[i];
+            centre[2] += m[i] * run.bodyZ()[i];
+            centre[3] += m[i] * run.bodyVx()[i];
+            centre[4] += m[i] * run.bodyVy()[i];
+            centre[5] += m[i] * run.bodyVz()[i];
+        }
+        for (int c = 0; c < 6; c++) {
+            centre[c] /= mm;
+        }
+        return mm;
     }
 
     private static double[] filledNaN(int n) {
@@ -104,13 +129,13 @@ public final class RunRecorder implements RunObserver {
         return a;
     }
 
-    private static HubbleDiagram diagram(RunView run) {
+    private static HubbleDiagram diagram(RunView run, double[] c) {
         int n = run.bodyCount();
         double[] mr = new double[n];
         double[] mv = new double[n];
         for (int i = 0; i < n; i++) {
-            radial(run.bodyX()[i], run.bodyY()[i], run.bodyZ()[i], run.bodyVx()[i], run.bodyVy()[i],
-                    run.bodyVz()[i], mr, mv, i);
+            radial(run.bodyX()[i] - c[0], run.bodyY()[i] - c[1], run.bodyZ()[i] - c[2], run.bodyVx()[i] - c[3],
+                    run.bodyVy()[i] - c[4], run.bodyVz()[i] - c[5], mr, mv, i);
         }
         int flow = 0;
         int[] host = run.tracerHost();
@@ -130,8 +155,8 @@ public final class RunRecorder implements RunObserver {
                 continue;
             }
             if (seen++ % stride == 0) {
-                radial(run.tracerX()[j], run.tracerY()[j], run.tracerZ()[j], run.tracerVx()[j],
-                        run.tracerVy()[j], run.tracerVz()[j], fr, fv, kept++);
+                radial(run.tracerX()[j] - c[0], run.tracerY()[j] - c[1], run.tracerZ()[j] - c[2],
+                        run.tracerVx()[j] - c[3], run.tracerVy()[j] - c[4], run.tracerVz()[j] - c[5], fr, fv, kept++);
             }
         }
         return new HubbleDiagram(run.tGyr(), mr, mv, Arrays.copyOf(fr, kept), Arrays.copyOf(fv, kept));
@@ -159,7 +184,7 @@ public final class RunRecorder implements RunObserver {
         return Arrays.copyOf(zeroGravity, count);
     }
 
-    /** Distance of each member from the centre of mass (NaN once merged), kpc, by name in order. */
+    /** Distance of each member from the group centre (NaN once merged), kpc, by name in order. */
     public Map<String, double[]> distancesKpc() {
         Map<String, double[]> out = new LinkedHashMap<>();
         distance.forEach((k, v) -> out.put(k, Arrays.copyOf(v, count)));

@@ -144,11 +144,13 @@ final class GroupSystem implements TrialSystem {
         if (tide.active()) {
             double c = tide.coefficient(t);
             double rate = tide.rate(t);
+            // |c|^(-1/2) and |c'|^(-1/3): both shrink in proportion to the time left before a rip,
+            // and neither collapses where c changes sign
             if (c != 0) {
                 tau = Math.min(tau, 1 / Math.sqrt(Math.abs(c)));
-                if (rate != 0) {
-                    tau = Math.min(tau, Math.abs(c / rate));
-                }
+            }
+            if (rate != 0) {
+                tau = Math.min(tau, 1 / Math.cbrt(Math.abs(rate)));
             }
         }
         if (friction != null) {
@@ -192,6 +194,19 @@ final class GroupSystem implements TrialSystem {
     }
 
     /** The energy budget now. */
+    /**
+     * The size of the budget's tidal terms now: |dark-energy potential| + |work of its time
+     * variation|. Near a big rip they outgrow the binding energy by many orders of magnitude,
+     * and the budget's error is then measured against them.
+     */
+    double tidalTermsMagnitude() {
+        double m = Math.abs(work.value());
+        if (tide.active()) {
+            m += Math.abs(0.5 * tide.coefficient(t) * BackgroundTide.secondMoment(bodies));
+        }
+        return m;
+    }
+
     double energyBudget() {
         CompensatedSum e = new CompensatedSum();
         e.add(kineticEnergy());

@@ -143,6 +143,17 @@ class EvolveCommandTest {
     }
 
     @Test
+    void tracersThatCannotFitInTheHeapAreRefusedBeforeAnythingIsAllocated() throws IOException {
+        Path f = dir.resolve("huge.toml");
+        Files.writeString(f, SCENARIO.replace("count = 300", "count = 90000000"));
+        Path out = dir.resolve("huge-out");
+        CommandRunner.Result r = CommandRunner.run("evolve", f.toString(), "--out", out.toString());
+        assertEquals(Holdfast.EXIT_BAD_INPUT, r.exitCode(), r.err());
+        assertTrue(r.err().contains("more than the") && r.err().contains("lower the star and flow counts"), r.err());
+        assertFalse(Files.exists(out));
+    }
+
+    @Test
     void aFullOutputFolderIsRefused() throws IOException {
         Path f = dir.resolve("pair.toml");
         CommandRunner.Result r = CommandRunner.run("evolve", f.toString(), "--out", run.toString());

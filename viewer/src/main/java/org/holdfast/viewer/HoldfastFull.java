@@ -24,17 +24,7 @@ public final class HoldfastFull {
     public static CommandLine commandLine(FrameSources.SourceOpener sources) {
         CommandLine cl = Holdfast.commandLine();
         cl.addSubcommand("view", new ViewCommand(sources));
-        cl.setParameterExceptionHandler(HoldfastFull::oneLine);
         return cl;
-    }
-
-    /** A malformed command line: one line naming the command and the option, exit code 2. */
-    private static int oneLine(CommandLine.ParameterException e, String[] args) {
-        CommandLine where = e.getCommandLine();
-        String name = where.getCommandSpec().qualifiedName(" ");
-        where.getErr().println(name + ": " + e.getMessage() + " (see " + name + " --help)");
-        where.getErr().flush();
-        return Holdfast.EXIT_BAD_INPUT;
     }
 
     public static void main(String[] args) {

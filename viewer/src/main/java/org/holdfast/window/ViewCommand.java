@@ -23,6 +23,7 @@ import picocli.CommandLine.Spec;
 /** {@code holdfast view}: the interactive window, also scriptable for rehearsals and tests. */
 @Command(name = "view",
         mixinStandardHelpOptions = true,
+        header = "Watch and steer a run in a window.",
         description = {
             "Opens a window on a finished run (its folder of snapshots) or on a scenario",
             "evolved live as the clock plays. Drag to turn the camera, wheel to zoom, H in",

@@ -1,0 +1,24 @@
+package org.holdfast.sweep;
+
+import java.io.Serializable;
+import java.util.LinkedHashMap;
+import java.util.Map;
+
+/**
+ * One run to make.
+ *
+ * @param run run index in the whole sweep
+ * @param point grid-point index
+ * @param sample sample index at that point
+ * @param seed the run's own seed
+ * @param overrides dotted key to value, fixed and varied together
+ */
+public record RunTask(long run, int point, int sample, long seed, Map<String, String> overrides)
+        implements Serializable {
+
+    private static final long serialVersionUID = 1L;
+
+    public RunTask {
+        overrides = new LinkedHashMap<>(overrides);
+    }
+}

@@ -1,0 +1,107 @@
+package org.holdfast.cli;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.nio.file.Path;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+
+import org.holdfast.sweep.RunFunctions;
+import org.holdfast.sweep.ToyRunFunction;
+import org.junit.jupiter.api.AfterEach;
+import org.junit.jupiter.api.BeforeEach;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/**
+ * The threshold command over the toy physics, whose crossings are known in closed form
+ * ({@link ToyRunFunction#criticalW}, {@link ToyRunFunction#ripTimeGyr}). Machinery only.
+ */
+class ThresholdCommandTest {
+
+    @TempDir
+    Path tmp;
+
+    Path scenario;
+
+    @BeforeEach
+    void setUp() throws Exception {
+        RunFunctions.install(new ToyRunFunction());
+        scenario = ToyRunFunction.writeScenario(tmp);
+    }
+
+    @AfterEach
+    void tearDown() {
+        RunFunctions.install(null);
+    }
+
+    @Test
+    void findsTheToysCriticalWOfAMember() throws Exception {
+        CommandRunner.Result r = CommandRunner.run("threshold", scenario.toString(), "--vary",
+                "cosmology.dark_energy.w0=-2.0:-1.0", "--member", "Vesk", "--fate", "ripped", "--tolerance", "1e-4",
+                "--within-gyr", "200", "--json");
+        assertEquals(0, r.exitCode(), r.err());
+        JsonNode j = new ObjectMapper().readTree(r.out());
+        // Runs to 200 Gyr: the toy rip at w = -1.1 comes at 93 Gyr, so the mass threshold decides.
+        double wc = ToyRunFunction.criticalW(1e11); // -1.1
+        assertTrue(j.get("low").asDouble() <= wc && wc <= j.get("high").asDouble(), r.out());
+        assertTrue(j.get("high").asDouble() - j.get("low").asDouble() <= 1e-4, r.out());
+        assertEquals(wc, j.get("value").asDouble(), 1e-4);
+        assertEquals(1.0, j.get("fraction_at_low_end").asDouble());
+        assertEquals(0.0, j.get("fraction_at_high_end").asDouble());
+        // Bisection halves [-2, -1] to 1e-4 in about log2(1e4) = 14 steps, plus the two ends.
+        int values = j.get("values_evaluated").asInt();
+        assertTrue(values >= 14 && values <= 17, "values evaluated: " + values);
+        assertEquals(values, j.get("runs").asInt());
+    }
+
+    @Test
+    void withinATimeTheCrossingMovesToWhereTheRipComesInTime() throws Exception {
+        // Toy rip time 28 / (3 |1 + w|) <= 20 Gyr needs w <= -1 - 28/60 = -1.4667, more phantom
+        // than the mass threshold -1.2 of the heaviest member, so that one decides.
+        CommandRunner.Result r = CommandRunner.run("threshold", scenario.toString(), "--vary",
+                "cosmology.dark_energy.w0=-2.0:-1.0", "--member", "Orrimal", "--fate", "ripped", "--within-gyr", "20",
+                "--tolerance", "1e-5", "--json");
+        assertEquals(0, r.exitCode(), r.err());
+        JsonNode j = new ObjectMapper().readTree(r.out());
+        assertEquals(-1 - 28.0 / 60, j.get("value").asDouble(), 1e-5);
+    }
+
+    @Test
+    void groupVerdictWithSamplesFindsTheMedianCrossing() throws Exception {
+        // With noise ~ N(0, 0.03) the lightest member (w_c = -1.0) is ripped in half of the
+        // realisations at w0 = -1.0; "dissolved" needs all three, so the heaviest decides:
+        // half of the draws have w0 + noise < -1.2 at w0 = -1.2. 41 samples leave a sampling
+        // spread of about 0.03 * 1.25 / sqrt(41) = 0.006 on that median.
+        CommandRunner.Result r = CommandRunner.run("threshold", scenario.toString(), "--vary",
+                "cosmology.dark_energy.w0=-1.5:-0.9", "--fate", "dissolved", "--samples", "41", "--tolerance", "1e-3",
+                "--workers", "2");
+        assertEquals(0, r.exitCode(), r.err());
+        double value = Double.parseDouble(r.out().lines().filter(l -> l.strip().startsWith("value"))
+                .findFirst().orElseThrow().strip().substring(5).strip());
+        assertEquals(-1.2, value, 0.02);
+        assertTrue(r.out().contains("bracket"), r.out());
+    }
+
+    @Test
+    void badInputIsExitCodeTwo() {
+        String s = scenario.toString();
+        CommandRunner.Result noChange = CommandRunner.run("threshold", s, "--vary", "cosmology.dark_energy.w0=-0.9:-0.5",
+                "--member", "Vesk", "--fate", "ripped");
+        assertEquals(Holdfast.EXIT_BAD_INPUT, noChange.exitCode());
+        assertTrue(noChange.err().contains("the same at both ends"), noChange.err());
+        CommandRunner.Result fate = CommandRunner.run("threshold", s, "--vary", "cosmology.dark_energy.w0=-2:-1",
+                "--fate", "ripped");
+        assertEquals(Holdfast.EXIT_BAD_INPUT, fate.exitCode());
+        assertTrue(fate.err().contains("--fate: ripped: choose one of bound, partly-bound, dissolved"), fate.err());
+        CommandRunner.Result member = CommandRunner.run("threshold", s, "--vary", "cosmology.dark_energy.w0=-2:-1",
+                "--member", "Nobody", "--fate", "ripped");
+        assertEquals(Holdfast.EXIT_BAD_INPUT, member.exitCode());
+        assertTrue(member.err().contains("--member: Nobody: no such member"), member.err());
+        CommandRunner.Result range = CommandRunner.run("threshold", s, "--vary", "cosmology.dark_energy.w0=-1:-2",
+                "--fate", "bound");
+        assertEquals(Holdfast.EXIT_BAD_INPUT, range.exitCode());
+    }
+}

@@ -1,0 +1,53 @@
+package org.holdfast.film;
+
+import java.util.Set;
+
+import org.holdfast.render.Overlay;
+import org.holdfast.render.RenderSettings;
+import org.holdfast.render.Stretch;
+import org.holdfast.render.projection.DomeProjection;
+import org.holdfast.render.projection.FlatProjection;
+import org.holdfast.render.projection.PanoramaProjection;
+import org.holdfast.render.projection.Projection;
+
+/**
+ * Everything a {@code [film]} table sets: length and frame rate, the view and frame size, the
+ * stretch, the clock mapping, the camera and the overlays shown.
+ *
+ * @param view flat, dome or panorama
+ */
+public record FilmSpec(double lengthS, int frameRate, String view, int widthPx, int heightPx, double domeSpanDeg,
+        double domeTiltDeg, Stretch stretch, FilmClock clock, CameraTrack camera, Set<Overlay> overlays) {
+
+    public FilmSpec {
+        overlays = Set.copyOf(overlays);
+    }
+
+    /** Number of frames: length x frame rate, rounded. */
+    public int frameCount() {
+        return Math.max(1, (int) Math.round(lengthS * frameRate));
+    }
+
+    /** Film second shown by frame {@code index} (1-based, as in the frame file names). */
+    public double filmSecondOf(int index) {
+        return (index - 1) / (double) frameRate;
+    }
+
+    /** The projection for this film's frames (a flat one follows each pose's field of view). */
+    public Projection projection() {
+        return switch (view) {
+            case "dome" -> new DomeProjection(widthPx, domeSpanDeg, domeTiltDeg);
+            case "panorama" -> new PanoramaProjection(heightPx);
+            default -> new FlatProjection(widthPx, heightPx, 50);
+        };
+    }
+
+    /** Render settings with this film's stretch and overlays (other looks at their defaults). */
+    public RenderSettings renderSettings() {
+        RenderSettings s = new RenderSettings().stretch(stretch).noOverlays();
+        for (Overlay o : overlays) {
+            s.overlay(o, true);
+        }
+        return s;
+    }
+}

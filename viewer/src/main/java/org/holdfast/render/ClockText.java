@@ -1,0 +1,69 @@
+package org.holdfast.render;
+
+import java.util.Locale;
+
+/** The words the clock overlay shows for a simulated time. */
+public final class ClockText {
+
+    private ClockText() {
+    }
+
+    /**
+     * The time in words: "today", "in 12.4 billion years", "in 350 million years",
+     * "2.1 billion years ago".
+     */
+    public static String words(double tGyr) {
+        double abs = Math.abs(tGyr);
+        String amount;
+        if (abs < 0.0005) {
+            return "today";
+        } else if (abs < 0.9995) {
+            amount = String.format(Locale.ROOT, "%d million years", Math.round(abs * 1000));
+        } else {
+            amount = String.format(Locale.ROOT, "%.1f billion years", abs);
+        }
+        return tGyr > 0 ? "in " + amount : amount + " ago";
+    }
+
+    /** The time in Gyr from today with its sign: "+12.40 Gyr from today". */
+    public static String gyr(double tGyr) {
+        return String.format(Locale.ROOT, "%+.2f Gyr from today", tGyr);
+    }
+
+    /** The time in Gyr from today, short: "+3.1 Gyr". */
+    public static String gyrShort(double tGyr) {
+        return String.format(Locale.ROOT, "%+.1f Gyr", tGyr);
+    }
+
+    /** The scale factor: "a = 1.834". */
+    public static String scaleFactor(double a) {
+        return String.format(Locale.ROOT, "a = %.3f", a);
+    }
+
+    /** A length for the scale bar: "50 kpc", "2 Mpc". */
+    public static String length(double kpc) {
+        if (kpc >= 1000) {
+            return trim(kpc / 1000) + " Mpc";
+        }
+        return trim(kpc) + " kpc";
+    }
+
+    /** The round length (1, 2 or 5 times a power of ten) closest below {@code maxKpc}. */
+    public static double roundLength(double maxKpc) {
+        if (!(maxKpc > 0) || !Double.isFinite(maxKpc)) {
+            throw new IllegalArgumentException("scale bar length must be positive: " + maxKpc);
+        }
+        double p = Math.pow(10, Math.floor(Math.log10(maxKpc)));
+        for (double m : new double[] {5, 2, 1}) {
+            if (m * p <= maxKpc * (1 + 1e-12)) {
+                return m * p;
+            }
+        }
+        return p;
+    }
+
+    private static String trim(double v) {
+        return v == Math.rint(v) ? String.format(Locale.ROOT, "%d", (long) v)
+                : String.format(Locale.ROOT, "%.3g", v);
+    }
+}

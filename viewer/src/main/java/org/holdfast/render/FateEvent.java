@@ -1,0 +1,37 @@
+package org.holdfast.render;
+
+import java.util.List;
+import java.util.Objects;
+
+/**
+ * One fate event in view: when it happened, what kind, and the members it concerns (for a
+ * merger, the survivor first).
+ *
+ * @param tGyr simulated time of the event, Gyr from today
+ * @param kind what happened
+ * @param members names of the galaxies involved, at least one
+ */
+public record FateEvent(double tGyr, FateKind kind, List<String> members) {
+
+    public FateEvent {
+        Objects.requireNonNull(kind, "kind");
+        members = List.copyOf(members);
+        if (members.isEmpty()) {
+            throw new IllegalArgumentException("a fate event needs at least one member");
+        }
+        if (!Double.isFinite(tGyr)) {
+            throw new IllegalArgumentException("event time must be finite: " + tGyr);
+        }
+    }
+
+    /** The event as one line of plain words, e.g. "Tessaly merged with Brin". */
+    public String describe() {
+        String first = members.get(0);
+        return switch (kind) {
+            case MERGED -> members.size() == 1 ? first + " merged"
+                    : first + " merged with " + String.join(" and ", members.subList(1, members.size()));
+            case ESCAPED -> String.join(" and ", members) + " broke free";
+            case RIPPED -> String.join(" and ", members) + " torn apart";
+        };
+    }
+}

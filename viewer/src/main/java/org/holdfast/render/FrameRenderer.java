@@ -1,0 +1,205 @@
+package org.holdfast.render;
+
+import java.awt.image.BufferedImage;
+import java.awt.image.DataBufferInt;
+import java.util.concurrent.ForkJoinPool;
+
+import org.holdfast.render.projection.FlatProjection;
+import org.holdfast.render.projection.Projection;
+
+/**
+ * Renders scene frames into images of one size and projection. Everything a frame needs (the
+ * light buffer, splat lists, the image) is allocated once and reused, so keep one renderer per
+ * film and call {@link #render} per frame; the returned image is overwritten by the next call.
+ *
+ * <p>A flat projection follows the field of view of each camera pose; dome and panorama frames
+ * show their fixed spans. Not thread-safe: one frame at a time (each frame uses all threads).
+ */
+public final class FrameRenderer implements AutoCloseable {
+
+    private static final float STAR_WHITE = 0.4f;
+    private static final float[] FLOW_RGB = {0.72f, 0.80f, 0.92f};
+
+    private final Projection baseProjection;
+    private final int width;
+    private final int height;
+    private final RenderSettings settings;
+    private final LightBuffer light;
+    private final SplatLayer splats;
+    private final SplatKernel galaxyKernel;
+    private final OverlayPainter overlays;
+    private final ForkJoinPool pool;
+    private final BufferedImage image;
+    private final int[] pixels;
+    private final float[] colours;
+    private final double[] view = new double[9];
+    private final double[] out = new double[2];
+    private double[] galaxyPx = new double[0];
+    private Projection projection;
+
+    public FrameRenderer(Projection projection, RenderSettings settings) {
+        this.baseProjection = projection;
+        this.projection = projection;
+        this.width = projection.width();
+        this.height = projection.height();
+        this.settings = settings;
+        this.light = new LightBuffer(width, height);
+        this.splats = new SplatLayer(new SplatKernel(settings.splatSigmaPx()), width, height);
+        this.galaxyKernel = new SplatKernel(settings.galaxySigmaPx());
+        this.overlays = new OverlayPainter(settings.overlays(), "dome".equals(projection.name()), height);
+        this.pool = new ForkJoinPool(settings.threads());
+        this.image = new BufferedImage(width, height, BufferedImage.TYPE_INT_RGB);
+        this.pixels = ((DataBufferInt) image.getRaster().getDataBuffer()).getData();
+        this.colours = new float[3 * Palette.size() + 3];
+        for (int c = 0; c < Palette.size(); c++) {
+            colours[3 * c] = (1 - STAR_WHITE) * Palette.red(c) + STAR_WHITE;
+            colours[3 * c + 1] = (1 - STAR_WHITE) * Palette.green(c) + STAR_WHITE;
+            colours[3 * c + 2] = (1 - STAR_WHITE) * Palette.blue(c) + STAR_WHITE;
+        }
+        System.arraycopy(FLOW_RGB, 0, colours, 3 * Palette.size(), 3);
+    }
+
+    public int width() {
+        return width;
+    }
+
+    public int height() {
+        return height;
+    }
+
+    /** The linear light of the last frame drawn. */
+    public LightBuffer light() {
+        return light;
+    }
+
+    /** Renders one frame: light, stretch, overlays. The image is reused by the next call. */
+    public BufferedImage render(SceneFrame scene, CameraPose pose) {
+        renderLight(scene, pose);
+        Stretch stretch = settings.stretch();
+        int bands = (height + SplatLayer.BAND_ROWS - 1) / SplatLayer.BAND_ROWS;
+        SplatLayer.run(pool, bands, b -> stretch.toPixels(light, pixels, b * SplatLayer.BAND_ROWS,
+                Math.min(height, (b + 1) * SplatLayer.BAND_ROWS)));
+        if (overlays.any()) {
+            overlays.paint(image, scene, galaxyPx, kpcPerPixel(scene, pose));
+        }
+        return image;
+    }
+
+    /** Draws the linear light of a frame (tracers, trails, galaxy centres) into {@link #light()}. */
+    public LightBuffer renderLight(SceneFrame scene, CameraPose pose) {
+        projection = projectionFor(pose);
+        pose.worldToCamera(view);
+        double ex = pose.eyeKpc().x();
+        double ey = pose.eyeKpc().y();
+        double ez = pose.eyeKpc().z();
+        double ref2 = settings.referenceDistanceKpc() * settings.referenceDistanceKpc();
+        double minD2 = 1e-4 * ref2;
+        light.clear();
+        splats.draw(scene, view, ex, ey, ez, projection, settings.starBrightness() * ref2,
+                settings.flowBrightness() * ref2, minD2, colours, light, pool);
+        drawTrails(scene, ex, ey, ez);
+        drawGalaxies(scene, ex, ey, ez, ref2, minD2);
+        return light;
+    }
+
+    private Projection projectionFor(CameraPose pose) {
+        if (!(baseProjection instanceof FlatProjection)) {
+            return baseProjection;
+        }
+        if (projection instanceof FlatProjection current && current.fovDeg() == pose.fovDeg()) {
+            return current;
+        }
+        return new FlatProjection(width, height, pose.fovDeg());
+    }
+
+    /** Projects a world point; returns false if it is not in view. Result in {@link #out}. */
+    private boolean projectWorld(double x, double y, double z, double ex, double ey, double ez) {
+        double wx = x - ex;
+        double wy = y - ey;
+        double wz = z - ez;
+        double cx = view[0] * wx + view[1] * wy + view[2] * wz;
+        double cy = view[3] * wx + view[4] * wy + view[5] * wz;
+        double cz = view[6] * wx + view[7] * wy + view[8] * wz;
+        return projection.project(cx, cy, cz, out);
+    }
+
+    private void drawTrails(SceneFrame scene, double ex, double ey, double ez) {
+        double now = scene.tGyr();
+        double span = settings.trailSpanGyr();
+        float base = (float) settings.trailBrightness();
+        boolean panorama = "panorama".equals(projection.name());
+        for (int g = 0; g < scene.galaxyCount(); g++) {
+            int c = scene.colourIndex(g);
+            double px = Double.NaN;
+            double py = Double.NaN;
+            for (int k = 0; k < scene.trailCount(g); k++) {
+                double t = scene.trailTGyr(g, k);
+                boolean seen = projectWorld(scene.trailX(g, k), scene.trailY(g, k), scene.trailZ(g, k), ex, ey, ez);
+                double qx = seen ? out[0] : Double.NaN;
+                double qy = seen ? out[1] : Double.NaN;
+                if (k > 0 && seen && !Double.isNaN(px) && !(panorama && Math.abs(qx - px) > 0.5 * width)) {
+                    double age = now - 0.5 * (t + scene.trailTGyr(g, k - 1));
+                    double fade = age < 0 ? 0 : Math.max(0, 1 - age / span);
+                    if (fade > 0) {
+                        float f = (float) fade * base;
+                        TrailPainter.line(light, px, py, qx, qy, f * Palette.red(c), f * Palette.green(c),
+                                f * Palette.blue(c));
+                    }
+                }
+                px = qx;
+                py = qy;
+            }
+        }
+    }
+
+    private void drawGalaxies(SceneFrame scene, double ex, double ey, double ez, double ref2, double minD2) {
+        int n = scene.galaxyCount();
+        if (galaxyPx.length < 2 * n) {
+            galaxyPx = new double[2 * n];
+        }
+        double scale = settings.galaxyBrightness() * ref2;
+        for (int g = 0; g < n; g++) {
+            double x = scene.galaxyX(g);
+            double y = scene.galaxyY(g);
+            double z = scene.galaxyZ(g);
+            if (!projectWorld(x, y, z, ex, ey, ez)) {
+                galaxyPx[2 * g] = Double.NaN;
+                galaxyPx[2 * g + 1] = Double.NaN;
+                continue;
+            }
+            galaxyPx[2 * g] = out[0];
+            galaxyPx[2 * g + 1] = out[1];
+            double d2 = (x - ex) * (x - ex) + (y - ey) * (y - ey) + (z - ez) * (z - ez);
+            float flux = (float) (scale / Math.max(d2, minD2));
+            int c = scene.colourIndex(g);
+            galaxyKernel.draw(light, out[0], out[1], flux * Palette.red(c), flux * Palette.green(c),
+                    flux * Palette.blue(c));
+        }
+    }
+
+    /** Size of a pixel at the depth of the galaxies' mean centre, flat projection only. */
+    private double kpcPerPixel(SceneFrame scene, CameraPose pose) {
+        if (!(projection instanceof FlatProjection flat) || scene.galaxyCount() == 0) {
+            return Double.NaN;
+        }
+        double mx = 0;
+        double my = 0;
+        double mz = 0;
+        int n = scene.galaxyCount();
+        for (int g = 0; g < n; g++) {
+            mx += scene.galaxyX(g) / n;
+            my += scene.galaxyY(g) / n;
+            mz += scene.galaxyZ(g) / n;
+        }
+        double wx = mx - pose.eyeKpc().x();
+        double wy = my - pose.eyeKpc().y();
+        double wz = mz - pose.eyeKpc().z();
+        double depth = -(view[6] * wx + view[7] * wy + view[8] * wz);
+        return depth > 0 ? depth / flat.focalPx() : Double.NaN;
+    }
+
+    @Override
+    public void close() {
+        pool.shutdown();
+    }
+}

@@ -1,0 +1,29 @@
+package org.holdfast.render;
+
+/** Display value proportional to light (gain x light), each channel clipped to [0, 1]. */
+final class LinearStretch implements Stretch {
+
+    private final double gain;
+
+    LinearStretch(double gain) {
+        if (!(gain > 0 && Double.isFinite(gain))) {
+            throw new IllegalArgumentException("linear gain must be > 0: " + gain);
+        }
+        this.gain = gain;
+    }
+
+    @Override
+    public double grey(double light) {
+        return Math.max(0, Math.min(1, gain * light));
+    }
+
+    @Override
+    public void toPixels(LightBuffer light, int[] argb, int rowFrom, int rowTo) {
+        int w = light.width();
+        for (int k = rowFrom * w, end = rowTo * w; k < end; k++) {
+            float[] rgb = light.rgb;
+            argb[k] = 0xFF000000 | Stretch.toByte(gain * rgb[3 * k]) << 16
+                    | Stretch.toByte(gain * rgb[3 * k + 1]) << 8 | Stretch.toByte(gain * rgb[3 * k + 2]);
+        }
+    }
+}

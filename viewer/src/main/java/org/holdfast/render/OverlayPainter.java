@@ -1,0 +1,169 @@
+package org.holdfast.render;
+
+import java.awt.BasicStroke;
+import java.awt.Color;
+import java.awt.Font;
+import java.awt.FontMetrics;
+import java.awt.GraphicsEnvironment;
+import java.awt.Graphics2D;
+import java.awt.RenderingHints;
+import java.awt.image.BufferedImage;
+import java.util.Arrays;
+import java.util.List;
+import java.util.Set;
+
+/**
+ * Draws the text and marks over a finished frame with Java2D (headless). The look: a condensed
+ * sans-serif in warm paper white with a soft dark shadow, secondary figures in slate grey, fate
+ * events in a pale gold, galaxy names in their own palette colour. On flat and panorama frames
+ * the clock sits at the lower left, events at the upper left and the scale bar at the lower
+ * right; on a dome everything is centred inside the disc, the clock near the lower rim and
+ * events near the upper rim, where a seated audience looks.
+ */
+final class OverlayPainter {
+
+    private static final Color PAPER = new Color(0xEDE6D6);
+    private static final Color SLATE = new Color(0x9FA8B8);
+    private static final Color GOLD = new Color(0xF6D58E);
+    private static final Color SHADOW = new Color(0, 0, 0, 170);
+    private static final int MAX_EVENTS = 4;
+
+    private final Set<Overlay> overlays;
+    private final boolean dome;
+    private final Font large;
+    private final Font small;
+
+    OverlayPainter(Set<Overlay> overlays, boolean dome, int height) {
+        this.overlays = overlays;
+        this.dome = dome;
+        String family = pickFamily();
+        int size = Math.max(11, Math.round(height / 34f));
+        this.large = new Font(family, Font.PLAIN, size);
+        this.small = new Font(family, Font.PLAIN, Math.max(10, Math.round(size * 0.68f)));
+    }
+
+    private static String pickFamily() {
+        try {
+            String[] names = GraphicsEnvironment.getLocalGraphicsEnvironment().getAvailableFontFamilyNames();
+            if (Arrays.asList(names).contains("DejaVu Sans Condensed")) {
+                return "DejaVu Sans Condensed";
+            }
+        } catch (RuntimeException | Error e) {
+            // no font configuration at all: fall back to the logical font
+        }
+        return Font.SANS_SERIF;
+    }
+
+    boolean any() {
+        return !overlays.isEmpty();
+    }
+
+    /**
+     * @param galaxyPx projected galaxy centres (x, y pairs), NaN where not in view
+     * @param kpcPerPx size of a pixel at the group's distance, or NaN when no scale bar applies
+     */
+    void paint(BufferedImage image, SceneFrame scene, double[] galaxyPx, double kpcPerPx) {
+        Graphics2D g = image.createGraphics();
+        try {
+            g.setRenderingHint(RenderingHints.KEY_TEXT_ANTIALIASING, RenderingHints.VALUE_TEXT_ANTIALIAS_ON);
+            g.setRenderingHint(RenderingHints.KEY_ANTIALIASING, RenderingHints.VALUE_ANTIALIAS_ON);
+            g.setRenderingHint(RenderingHints.KEY_FRACTIONALMETRICS, RenderingHints.VALUE_FRACTIONALMETRICS_ON);
+            int w = image.getWidth();
+            int h = image.getHeight();
+            int margin = Math.max(6, h / 30);
+            if (overlays.contains(Overlay.NAMES)) {
+                paintNames(g, scene, galaxyPx);
+            }
+            paintClock(g, scene, w, h, margin);
+            if (overlays.contains(Overlay.EVENTS)) {
+                paintEvents(g, scene, w, h, margin);
+            }
+            if (overlays.contains(Overlay.SCALE_BAR) && Double.isFinite(kpcPerPx) && kpcPerPx > 0) {
+                paintScaleBar(g, kpcPerPx, w, h, margin);
+            }
+        } finally {
+            g.dispose();
+        }
+    }
+
+    private void paintNames(Graphics2D g, SceneFrame scene, double[] px) {
+        g.setFont(small);
+        int gap = Math.max(4, small.getSize() / 2);
+        for (int i = 0; i < scene.galaxyCount(); i++) {
+            double x = px[2 * i];
+            double y = px[2 * i + 1];
+            if (Double.isNaN(x)) {
+                continue;
+            }
+            text(g, scene.name(i), (int) Math.round(x) + gap, (int) Math.round(y) - gap,
+                    new Color(Palette.rgb(scene.colourIndex(i))));
+        }
+    }
+
+    private void paintClock(Graphics2D g, SceneFrame scene, int w, int h, int margin) {
+        boolean clock = overlays.contains(Overlay.CLOCK);
+        boolean factor = overlays.contains(Overlay.SCALE_FACTOR);
+        if (!clock && !factor) {
+            return;
+        }
+        FontMetrics fl = g.getFontMetrics(large);
+        FontMetrics fs = g.getFontMetrics(small);
+        String second = clock && factor ? ClockText.gyr(scene.tGyr()) + "   " + ClockText.scaleFactor(scene.scaleFactor())
+                : clock ? ClockText.gyr(scene.tGyr()) : ClockText.scaleFactor(scene.scaleFactor());
+        int y2 = dome ? (int) (h * 0.86) : h - margin;
+        int y1 = y2 - fs.getHeight();
+        if (clock) {
+            String first = ClockText.words(scene.tGyr());
+            g.setFont(large);
+            text(g, first, dome ? (w - fl.stringWidth(first)) / 2 : margin, y1, PAPER);
+        }
+        g.setFont(small);
+        text(g, second, dome ? (w - fs.stringWidth(second)) / 2 : margin, y2, SLATE);
+    }
+
+    private void paintEvents(Graphics2D g, SceneFrame scene, int w, int h, int margin) {
+        List<FateEvent> events = scene.events();
+        int last = events.size();
+        while (last > 0 && events.get(last - 1).tGyr() > scene.tGyr()) {
+            last--;
+        }
+        int first = Math.max(0, last - MAX_EVENTS);
+        g.setFont(small);
+        FontMetrics fs = g.getFontMetrics(small);
+        int y = dome ? (int) (h * 0.16) : margin + fs.getAscent();
+        for (int k = first; k < last; k++) {
+            FateEvent e = events.get(k);
+            String line = e.describe() + "  \u00b7  at " + ClockText.gyrShort(e.tGyr());
+            Color c = k == last - 1 ? GOLD : GOLD.darker();
+            text(g, line, dome ? (w - fs.stringWidth(line)) / 2 : margin, y, c);
+            y += fs.getHeight();
+        }
+    }
+
+    private void paintScaleBar(Graphics2D g, double kpcPerPx, int w, int h, int margin) {
+        double lengthKpc = ClockText.roundLength(0.18 * w * kpcPerPx);
+        int len = (int) Math.round(lengthKpc / kpcPerPx);
+        int x1 = w - margin;
+        int x0 = x1 - len;
+        int y = h - margin;
+        int tick = Math.max(3, h / 120);
+        g.setStroke(new BasicStroke(Math.max(1f, h / 540f)));
+        g.setColor(SHADOW);
+        g.drawLine(x0 + 1, y + 1, x1 + 1, y + 1);
+        g.setColor(PAPER);
+        g.drawLine(x0, y, x1, y);
+        g.drawLine(x0, y - tick, x0, y + tick);
+        g.drawLine(x1, y - tick, x1, y + tick);
+        g.setFont(small);
+        String label = ClockText.length(lengthKpc);
+        int tw = g.getFontMetrics(small).stringWidth(label);
+        text(g, label, x0 + (len - tw) / 2, y - tick - 3, PAPER);
+    }
+
+    private static void text(Graphics2D g, String s, int x, int y, Color c) {
+        g.setColor(SHADOW);
+        g.drawString(s, x + 1, y + 1);
+        g.setColor(c);
+        g.drawString(s, x, y);
+    }
+}

@@ -1,0 +1,74 @@
+package org.holdfast.render;
+
+/**
+ * Positions between two saved snapshots. Galaxies, whose velocities are saved, use the cubic
+ * Hermite interpolant (matches position and velocity at both ends, so exact for motion that is
+ * a cubic in time); tracers, saved without velocities or too many to afford them, may use
+ * straight-line blending. Velocities are in kpc/Gyr (convert km/s with
+ * {@link org.holdfast.units.Units#KMS_TO_KPC_PER_GYR}).
+ */
+public final class SnapshotInterpolation {
+
+    private SnapshotInterpolation() {
+    }
+
+    /**
+     * Cubic Hermite interpolation of one coordinate on [t0, t1] at t.
+     *
+     * @param x0 value at t0, v0 its rate (per Gyr); likewise x1, v1 at t1
+     */
+    public static double hermite(double t0, double x0, double v0, double t1, double x1, double v1, double t) {
+        double h = t1 - t0;
+        double s = (t - t0) / h;
+        double s2 = s * s;
+        double s3 = s2 * s;
+        double h00 = 2 * s3 - 3 * s2 + 1;
+        double h10 = s3 - 2 * s2 + s;
+        double h01 = -2 * s3 + 3 * s2;
+        double h11 = s3 - s2;
+        return h00 * x0 + h10 * h * v0 + h01 * x1 + h11 * h * v1;
+    }
+
+    /**
+     * Cubic Hermite interpolation of whole arrays of coordinates.
+     *
+     * @param n number of values to interpolate
+     * @param out receives n values (may not alias the inputs)
+     */
+    public static void hermite(double t0, double[] x0, double[] v0, double t1, double[] x1, double[] v1, double t,
+            int n, double[] out) {
+        checkInterval(t0, t1, t);
+        double h = t1 - t0;
+        double s = (t - t0) / h;
+        double s2 = s * s;
+        double s3 = s2 * s;
+        double h00 = 2 * s3 - 3 * s2 + 1;
+        double h10 = (s3 - 2 * s2 + s) * h;
+        double h01 = -2 * s3 + 3 * s2;
+        double h11 = (s3 - s2) * h;
+        for (int i = 0; i < n; i++) {
+            out[i] = h00 * x0[i] + h10 * v0[i] + h01 * x1[i] + h11 * v1[i];
+        }
+    }
+
+    /** Straight-line blending of float coordinates (tracers) at t in [t0, t1]. */
+    public static void linear(double t0, float[] x0, double t1, float[] x1, double t, int n, float[] out) {
+        checkInterval(t0, t1, t);
+        float s = (float) ((t - t0) / (t1 - t0));
+        float r = 1 - s;
+        for (int i = 0; i < n; i++) {
+            out[i] = r * x0[i] + s * x1[i];
+        }
+    }
+
+    private static void checkInterval(double t0, double t1, double t) {
+        if (!(t1 != t0) || !Double.isFinite(t0) || !Double.isFinite(t1)) {
+            throw new IllegalArgumentException("snapshot times must differ and be finite: " + t0 + ", " + t1);
+        }
+        double lo = Math.min(t0, t1);
+        double hi = Math.max(t0, t1);
+        if (!(t >= lo && t <= hi)) {
+            throw new IllegalArgumentException("time " + t + " Gyr lies outside the snapshots [" + lo + ", " + hi + "]");
+        }
+    }
+}
