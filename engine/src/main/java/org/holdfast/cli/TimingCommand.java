@@ -20,6 +20,7 @@ import picocli.CommandLine.Spec;
 
 /** {@code holdfast timing}: the timing-argument mass of a pair, with and without the dark-energy force. */
 @Command(name = "timing",
+        header = "The timing-argument mass of a pair, with and without the dark-energy force.",
         mixinStandardHelpOptions = true,
         description = {
             "Finds the mass of a pair from its separation and radial velocity today, assuming the two",
