@@ -12,17 +12,10 @@ import java.util.Map;
 import java.util.OptionalDouble;
 import java.util.concurrent.Callable;
 
-import org.holdfast.expansion.ConstantW;
-import org.holdfast.expansion.CosmologicalConstant;
-import org.holdfast.expansion.Cosmology;
 import org.holdfast.expansion.CosmologyReader;
-import org.holdfast.expansion.DarkEnergyModel;
 import org.holdfast.expansion.ExpansionPlot;
 import org.holdfast.expansion.ExpansionRangeException;
 import org.holdfast.expansion.ExpansionTable;
-import org.holdfast.expansion.InvalidCosmologyException;
-import org.holdfast.expansion.W0WaDarkEnergy;
-import org.holdfast.expansion.WTableCsv;
 import org.holdfast.scenario.Node;
 import org.holdfast.scenario.Overrides;
 import org.holdfast.scenario.ScenarioException;
@@ -33,6 +26,7 @@ import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.SerializationFeature;
 
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
@@ -61,27 +55,8 @@ public final class ExpansionCommand implements Callable<Integer> {
     @Parameters(arity = "0..1", paramLabel = "SCENARIO", description = "A scenario file with a [cosmology] table.")
     Path scenario;
 
-    @Option(names = "--h0", paramLabel = "KM_S_MPC", description = "Hubble constant in km/s/Mpc.")
-    Double h0;
-
-    @Option(names = "--omega-m", paramLabel = "X", description = "Matter density parameter today.")
-    Double omegaM;
-
-    @Option(names = "--omega-r", paramLabel = "X|cmb",
-            description = "Radiation density today: a number, or 'cmb' (T = 2.7255 K, N_eff = 3.046). Default 0.")
-    String omegaR;
-
-    @Option(names = "--omega-k", paramLabel = "X", description = "Curvature parameter (default 0: flat).")
-    Double omegaK;
-
-    @Option(names = "--w0", paramLabel = "W", description = "Dark-energy w today (default -1).")
-    Double w0;
-
-    @Option(names = "--wa", paramLabel = "W", description = "Dark-energy wa in w = w0 + wa (1 - a) (default 0).")
-    Double wa;
-
-    @Option(names = "--w-table", paramLabel = "FILE.csv", description = "w(a) table with columns a,w.")
-    Path wTable;
+    @Mixin
+    CosmologyOptions cosmology;
 
     @Option(names = "--set", paramLabel = "KEY=VALUE", description = "Override a scenario value, e.g. cosmology.h0=68.")
     List<String> sets = new ArrayList<>();
@@ -124,7 +99,7 @@ public final class ExpansionCommand implements Callable<Integer> {
             if (!sets.isEmpty()) {
                 throw new ScenarioException("--set", null, "needs a scenario file");
             }
-            table = solve(fromOptions());
+            table = CosmologyOptions.solve(cosmology.cosmology(), horizonGyr);
             title = "holdfast expansion";
         }
         List<double[]> samples = samples(table);
@@ -153,64 +128,10 @@ public final class ExpansionCommand implements Callable<Integer> {
     }
 
     private void rejectOptionsWithScenario() {
-        if (h0 != null || omegaM != null || omegaR != null || omegaK != null || w0 != null || wa != null
-                || wTable != null) {
+        if (cosmology.any()) {
             throw new ScenarioException("--h0/--omega-m/...", null,
                     "give either a scenario file or cosmology options, not both (use --set cosmology.KEY=VALUE)");
         }
-    }
-
-    private Cosmology fromOptions() {
-        if (h0 == null || omegaM == null) {
-            throw new ScenarioException(h0 == null ? "--h0" : "--omega-m", null,
-                    "missing: give a scenario file, or at least --h0 and --omega-m");
-        }
-        DarkEnergyModel model;
-        if (wTable != null) {
-            if (w0 != null || wa != null) {
-                throw new ScenarioException("--w-table", null, "give either --w-table or --w0/--wa, not both");
-            }
-            if (!Files.isRegularFile(wTable)) {
-                throw new ScenarioException("--w-table", null, "no such file: " + wTable);
-            }
-            model = WTableCsv.read(wTable);
-        } else {
-            double w = w0 == null ? -1 : w0;
-            double a = wa == null ? 0 : wa;
-            model = a == 0 ? (w == -1 ? new CosmologicalConstant() : new ConstantW(w)) : new W0WaDarkEnergy(w, a);
-        }
-        double r = 0;
-        if (omegaR != null) {
-            if (omegaR.equals("cmb")) {
-                r = h0 > 0 ? Cosmology.radiationFromCmb(h0, Cosmology.T_CMB_K, Cosmology.N_EFF) : 0;
-            } else {
-                try {
-                    r = Double.parseDouble(omegaR);
-                } catch (NumberFormatException e) {
-                    throw new ScenarioException("--omega-r", null, "expected a number or 'cmb', got '" + omegaR + "'");
-                }
-            }
-        }
-        try {
-            return new Cosmology(h0, omegaM, r, omegaK == null ? 0 : omegaK, model);
-        } catch (InvalidCosmologyException e) {
-            throw new ScenarioException(option(e.parameter()), null, e.getMessage());
-        }
-    }
-
-    private ExpansionTable solve(Cosmology c) {
-        try {
-            return c.solve(horizonGyr);
-        } catch (InvalidCosmologyException e) {
-            throw new ScenarioException(option(e.parameter()), null, e.getMessage());
-        }
-    }
-
-    private static String option(String parameter) {
-        if (parameter == null || parameter.equals("cosmology")) {
-            return "cosmology";
-        }
-        return "--" + parameter.replace('_', '-');
     }
 
     /** Rows of t, a, H [km/s/Mpc], k [1/Gyr^2], rho_de [kg/m^3], w. */

@@ -32,7 +32,8 @@ import picocli.CommandLine.Spec;
             SweepMergeCommand.class,
             ThresholdCommand.class,
             NewCommand.class,
-            BenchCommand.class
+            BenchCommand.class,
+            TimingCommand.class
         })
 public final class Holdfast implements Runnable {
 

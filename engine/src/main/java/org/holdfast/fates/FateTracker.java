@@ -21,6 +21,8 @@ import org.holdfast.run.StopReason;
  * of the run (so the growth of k unbound it), otherwise {@code escaped}; one that comes back
  * is bound again. Mergers come from the simulation's own events.
  *
+ * <p>The main group holds while it has two members or more, or has absorbed members by merging.
+ *
  * <p>Times are resolved to the analysis interval: a member's time is the first analysis time
  * at which it was found outside the main group for good.
  */
@@ -119,7 +121,8 @@ public final class FateTracker implements RunObserver {
         for (int i : main) {
             isMain[i] = true;
         }
-        boolean pair = main.length >= 2;
+        // a main group that absorbed members by merging holds together even when it is one body now
+        boolean pair = main.length >= 2 || absorbedInto(run, main);
         if (mainHasPair && !pair && Double.isNaN(mainLostPairAt)) {
             mainLostPairAt = t;
         }
@@ -148,6 +151,23 @@ public final class FateTracker implements RunObserver {
         }
         bodiesAtEnd = n;
         outsideAtEnd = outside;
+    }
+
+    /** Whether any member of the main group survived a merger. */
+    private static boolean absorbedInto(RunView run, int[] main) {
+        List<RunEvent> events = run.events();
+        if (events.isEmpty()) {
+            return false;
+        }
+        for (int i : main) {
+            String name = run.bodyName(i);
+            for (RunEvent e : events) {
+                if (e.kind().equals("merged") && e.members().get(0).equals(name)) {
+                    return true;
+                }
+            }
+        }
+        return false;
     }
 
     /** Whether body i would be bound to the main group if k still had its starting value. */

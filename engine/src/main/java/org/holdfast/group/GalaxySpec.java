@@ -10,7 +10,14 @@ package org.holdfast.group;
  * @param velocityKms velocity, 3 components
  * @param halo the mass profile
  * @param stars star tracers that make the galaxy visible; null for none
+ * @param coulombLog this member's own Coulomb logarithm for dynamical friction; null for the run's
  */
 public record GalaxySpec(String name, double massMsun, double[] positionKpc, double[] velocityKms,
-        HaloSpec halo, StarsSpec stars) {
+        HaloSpec halo, StarsSpec stars, org.holdfast.forces.CoulombLog coulombLog) {
+
+    /** A member that uses the run's Coulomb logarithm. */
+    public GalaxySpec(String name, double massMsun, double[] positionKpc, double[] velocityKms, HaloSpec halo,
+            StarsSpec stars) {
+        this(name, massMsun, positionKpc, velocityKms, halo, stars, null);
+    }
 }

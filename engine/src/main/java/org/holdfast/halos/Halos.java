@@ -43,6 +43,57 @@ public final class Halos {
         return Math.cbrt(3 * massMsun / (800 * Math.PI * positive(criticalDensityToday, "critical density")));
     }
 
+    /**
+     * The halo of a merger remnant: the survivor's profile holding both masses, every length
+     * scaled by (M_total / M_survivor)^(1/3) so that the mean density inside each length is
+     * kept (for NFW this keeps the concentration, as r_200 grows as M^(1/3); Navarro, Frenk &amp;
+     * White 1996). A documented simplification, not a model of the remnant's relaxation.
+     */
+    public static HaloProfile remnant(HaloProfile survivor, double totalMassMsun) {
+        double s = Math.cbrt(totalMassMsun / survivor.mass());
+        if (survivor instanceof PointHalo p) {
+            return new PointHalo(totalMassMsun, p.softeningKpc() * s);
+        }
+        if (survivor instanceof PlummerHalo) {
+            return new PlummerHalo(totalMassMsun, survivor.lengthKpc() * s);
+        }
+        if (survivor instanceof HernquistHalo) {
+            return new HernquistHalo(totalMassMsun, survivor.lengthKpc() * s);
+        }
+        if (survivor instanceof IsothermalHalo) {
+            return new IsothermalHalo(totalMassMsun, survivor.extentKpc() * s);
+        }
+        if (survivor instanceof NfwHalo n) {
+            return new NfwHalo(totalMassMsun, n.scaleKpc() * s, n.extentKpc() * s);
+        }
+        throw new IllegalArgumentException("no merger rule for a " + survivor.kind() + " halo");
+    }
+
+    /**
+     * The radius holding a tenth of a halo's mass (0 for a bare point), by bisection on M(&lt;r).
+     * Used for the default merge distance.
+     */
+    public static double tenthMassRadius(HaloProfile h) {
+        double target = 0.1 * h.mass();
+        if (h.enclosedMass(0) >= target || h.lengthKpc() == 0) {
+            return 0;
+        }
+        double lo = 0;
+        double hi = Math.max(h.lengthKpc(), 1e-9);
+        while (h.enclosedMass(hi) < target) {
+            hi *= 2;
+        }
+        for (int k = 0; k < 200 && hi - lo > 1e-12 * hi; k++) {
+            double mid = 0.5 * (lo + hi);
+            if (h.enclosedMass(mid) < target) {
+                lo = mid;
+            } else {
+                hi = mid;
+            }
+        }
+        return 0.5 * (lo + hi);
+    }
+
     private static HaloProfile nfw(HaloSpec spec, double m200, double rhoCrit) {
         boolean hasScale = !Double.isNaN(spec.scaleKpc());
         boolean hasConc = !Double.isNaN(spec.concentration());

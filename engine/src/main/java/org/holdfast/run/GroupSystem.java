@@ -3,6 +3,7 @@ package org.holdfast.run;
 import org.holdfast.forces.BackgroundTide;
 import org.holdfast.forces.Bodies;
 import org.holdfast.forces.CompensatedSum;
+import org.holdfast.forces.DynamicalFriction;
 import org.holdfast.forces.PairGravity;
 import org.holdfast.forces.TracerField;
 import org.holdfast.forces.Tracers;
@@ -15,6 +16,10 @@ import org.holdfast.integrators.TrialSystem;
  * The work integral is accumulated over each drift, where the positions move on straight lines
  * and only the clock runs, with 3-point Gauss–Legendre quadrature (exact for the quadratic
  * sum m r^2 times a cubic c'(t)).
+ *
+ * <p>With dynamical friction the budget also subtracts the work the drag has done (counted in
+ * each kick), and it adds back the orbital energy that mergers took out of the pair sum, so a
+ * budget that stays constant means the integration, not the physics, is accurate.
  */
 final class GroupSystem implements TrialSystem {
 
@@ -26,22 +31,30 @@ final class GroupSystem implements TrialSystem {
     final PairGravity gravity;
     final BackgroundTide tide;
     final TracerField field;
+    /** Null when the run has no dynamical friction. */
+    final DynamicalFriction friction;
     private double t;
     private boolean trial;
     private final CompensatedSum work = new CompensatedSum();
     private final double[] saved;
     private double savedT;
     private double savedWork;
+    private final CompensatedSum frictionWork = new CompensatedSum();
+    private final double[] savedDrag;
+    private double savedFrictionWork;
+    private double mergerEnergy;
 
     GroupSystem(Bodies bodies, Tracers tracers, PairGravity gravity, BackgroundTide tide, TracerField field,
-            double startGyr) {
+            DynamicalFriction friction, double startGyr) {
         this.bodies = bodies;
         this.tracers = tracers;
         this.gravity = gravity;
         this.tide = tide;
         this.field = field;
+        this.friction = friction;
         this.t = startGyr;
         this.saved = new double[9 * bodies.x.length];
+        this.savedDrag = new double[3 * bodies.x.length];
     }
 
     double time() {
@@ -56,6 +69,9 @@ final class GroupSystem implements TrialSystem {
     @Override
     public void kick(double h) {
         Bodies b = bodies;
+        if (friction != null) {
+            frictionWork.add(friction.work(b, h));
+        }
         for (int i = 0; i < b.count(); i++) {
             b.vx[i] += h * b.ax[i];
             b.vy[i] += h * b.ay[i];
@@ -114,6 +130,9 @@ final class GroupSystem implements TrialSystem {
         if (c != 0) {
             tide.accelerate(b, c);
         }
+        if (friction != null) {
+            friction.accelerate(b);
+        }
         if (!trial && tracers.count > 0) {
             field.accelerate(tracers, b, c);
         }
@@ -134,6 +153,9 @@ final class GroupSystem implements TrialSystem {
                 tau = Math.min(tau, 1 / Math.cbrt(Math.abs(rate)));
             }
         }
+        if (friction != null) {
+            tau = Math.min(tau, friction.timescale());
+        }
         return tau;
     }
 
@@ -142,6 +164,10 @@ final class GroupSystem implements TrialSystem {
         bodies.copyStateTo(saved);
         savedT = t;
         savedWork = work.value();
+        if (friction != null) {
+            friction.save(savedDrag, bodies.count());
+            savedFrictionWork = frictionWork.value();
+        }
         trial = true;
     }
 
@@ -150,6 +176,10 @@ final class GroupSystem implements TrialSystem {
         bodies.restoreStateFrom(saved);
         t = savedT;
         work.set(savedWork);
+        if (friction != null) {
+            friction.restore(savedDrag, bodies.count());
+            frictionWork.set(savedFrictionWork);
+        }
         trial = false;
     }
 
@@ -185,6 +215,23 @@ final class GroupSystem implements TrialSystem {
             e.add(-0.5 * tide.coefficient(t) * BackgroundTide.secondMoment(bodies));
         }
         e.add(-work.value());
+        e.add(-frictionWork.value());
+        e.add(mergerEnergy);
         return e.value();
+    }
+
+    /** Work done by dynamical friction so far (negative: energy taken out), Msun kpc^2/Gyr^2. */
+    double frictionWork() {
+        return frictionWork.value();
+    }
+
+    /** Orbital energy mergers have taken out of the pair sum so far, Msun kpc^2/Gyr^2. */
+    double mergerEnergy() {
+        return mergerEnergy;
+    }
+
+    /** Books the orbital energy a merger removed: the budget before minus after. */
+    void addMergerEnergy(double removed) {
+        mergerEnergy += removed;
     }
 }

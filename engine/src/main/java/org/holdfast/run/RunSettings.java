@@ -1,5 +1,7 @@
 package org.holdfast.run;
 
+import org.holdfast.forces.CoulombLog;
+
 /**
  * How a run steps and what it includes.
  *
@@ -12,9 +14,38 @@ package org.holdfast.run;
  * @param darkEnergyForce include the dark-energy term k(t) r
  * @param backgroundMatter include the pull of the mean cosmic matter density
  * @param seed for everything random (tracer placement)
+ * @param dynamicalFriction include Chandrasekhar's dynamical friction between members
+ * @param coulombLog the run-wide Coulomb logarithm (members may give their own)
+ * @param mergeWithinKpc members bound to each other and closer than this merge; NaN for the
+ *     default of each pair ({@link Mergers#defaultDistanceKpc}); 0 for no mergers
  */
 public record RunSettings(double startGyr, double untilGyr, Scheme scheme, double accuracy, double stepMyr,
-        double snapshotEveryMyr, boolean darkEnergyForce, boolean backgroundMatter, long seed) {
+        double snapshotEveryMyr, boolean darkEnergyForce, boolean backgroundMatter, long seed,
+        boolean dynamicalFriction, CoulombLog coulombLog, double mergeWithinKpc) {
+
+    /** Settings without dynamical friction, with mergers at each pair's default distance. */
+    public RunSettings(double startGyr, double untilGyr, Scheme scheme, double accuracy, double stepMyr,
+            double snapshotEveryMyr, boolean darkEnergyForce, boolean backgroundMatter, long seed) {
+        this(startGyr, untilGyr, scheme, accuracy, stepMyr, snapshotEveryMyr, darkEnergyForce, backgroundMatter, seed,
+                false, CoulombLog.DEFAULT, Double.NaN);
+    }
+
+    /** The same settings with friction switched on or off. */
+    public RunSettings withFriction(boolean on, CoulombLog log) {
+        return new RunSettings(startGyr, untilGyr, scheme, accuracy, stepMyr, snapshotEveryMyr, darkEnergyForce,
+                backgroundMatter, seed, on, log, mergeWithinKpc);
+    }
+
+    /** The same settings with another merge distance (NaN: default, 0: none). */
+    public RunSettings withMergeWithin(double kpc) {
+        return new RunSettings(startGyr, untilGyr, scheme, accuracy, stepMyr, snapshotEveryMyr, darkEnergyForce,
+                backgroundMatter, seed, dynamicalFriction, coulombLog, kpc);
+    }
+
+    /** Whether members may merge: not in a backward run (a merger cannot be undone), not at distance 0. */
+    public boolean mergers() {
+        return !backward() && mergeWithinKpc != 0;
+    }
 
     /** The integration schemes. */
     public enum Scheme {

@@ -7,6 +7,8 @@ import java.util.Locale;
 import org.holdfast.expansion.ExpansionHistory;
 import org.holdfast.forces.BackgroundTide;
 import org.holdfast.forces.Bodies;
+import org.holdfast.forces.CoulombLog;
+import org.holdfast.forces.DynamicalFriction;
 import org.holdfast.forces.KernelTable;
 import org.holdfast.forces.PairGravity;
 import org.holdfast.forces.TracerField;
@@ -45,6 +47,8 @@ public final class Simulation implements RunView, AutoCloseable {
     private final SymmetricStepSize stepSize;
     private final double[] frameOffset;
     private final double[] frameVelocity;
+    /** Null when members do not merge (a backward run, or merge_within_kpc = 0). */
+    private final Mergers mergers;
     private long steps;
     private double energy0;
     private double energyScale;
@@ -61,6 +65,8 @@ public final class Simulation implements RunView, AutoCloseable {
         this.stepSize = settings.fixedStep() ? null : new SymmetricStepSize(settings.accuracy(), 2);
         this.frameOffset = offset;
         this.frameVelocity = velocity;
+        this.mergers = settings.mergers()
+                ? new Mergers(settings.mergeWithinKpc(), history, settings.darkEnergyForce()) : null;
     }
 
     /** A simulation using every core for the tracers. */
@@ -104,8 +110,9 @@ public final class Simulation implements RunView, AutoCloseable {
         }
         Tracers tracers = seedTracers(group, bodies, settings, history);
         BackgroundTide tide = new BackgroundTide(history, settings.darkEnergyForce(), settings.backgroundMatter());
+        DynamicalFriction friction = settings.dynamicalFriction() ? friction(gs, bodies, settings) : null;
         GroupSystem system = new GroupSystem(bodies, tracers, new PairGravity(table), tide,
-                new TracerField(threads), settings.startGyr());
+                new TracerField(threads), friction, settings.startGyr());
         Simulation sim = new Simulation(settings, history, system, cm, cv);
         system.updateAccelerations();
         sim.energy0 = system.energyBudget();
@@ -163,6 +170,9 @@ public final class Simulation implements RunView, AutoCloseable {
             reason = checkFinite();
             if (reason != null) {
                 break;
+            }
+            if (mergers != null && mergers.check(system)) {
+                updateEnergy();
             }
             if (system.bodies.count() <= 64) {
                 updateEnergy();
@@ -332,6 +342,18 @@ public final class Simulation implements RunView, AutoCloseable {
         return t;
     }
 
+    private static DynamicalFriction friction(List<GalaxySpec> gs, Bodies bodies, RunSettings settings) {
+        java.util.Map<String, CoulombLog> own = new java.util.HashMap<>();
+        for (GalaxySpec g : gs) {
+            if (g.coulombLog() != null) {
+                own.put(g.name(), g.coulombLog());
+            }
+        }
+        DynamicalFriction f = new DynamicalFriction(settings.coulombLog(), own);
+        f.refresh(bodies);
+        return f;
+    }
+
     private static void checkStars(StarsSpec s) {
         if (s == null) {
             return;
@@ -351,6 +373,11 @@ public final class Simulation implements RunView, AutoCloseable {
         if (s.fixedStep() ? !(s.stepMyr() > 0) : !(s.accuracy() > 0)) {
             throw new IllegalArgumentException(s.fixedStep() ? "step_myr must be positive" : "accuracy must be positive");
         }
+    }
+
+    /** The system being stepped (for tests in this package). */
+    GroupSystem system() {
+        return system;
     }
 
     /** The integrator in use. */
@@ -483,5 +510,20 @@ public final class Simulation implements RunView, AutoCloseable {
     @Override
     public double[] frameVelocity() {
         return frameVelocity.clone();
+    }
+
+    @Override
+    public List<RunEvent> events() {
+        return mergers == null ? List.of() : List.copyOf(mergers.events());
+    }
+
+    /** Work dynamical friction has done so far (negative), Msun kpc^2/Gyr^2; 0 without friction. */
+    public double frictionWork() {
+        return system.frictionWork();
+    }
+
+    /** Orbital energy taken out of the pair sum by mergers so far, Msun kpc^2/Gyr^2. */
+    public double mergerEnergy() {
+        return system.mergerEnergy();
     }
 }

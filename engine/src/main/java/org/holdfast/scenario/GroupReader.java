@@ -118,7 +118,7 @@ public final class GroupReader {
      * a member given by observation (null otherwise).
      */
     static GalaxySpec galaxy(Node g, double[] observedPos, double[] observedVel) {
-        g.allowOnly("name", "mass_msun", "position_kpc", "velocity_kms", "observed", "halo", "stars");
+        g.allowOnly("name", "mass_msun", "position_kpc", "velocity_kms", "observed", "halo", "stars", "coulomb_log");
         String name = g.string("name");
         if (name.isBlank()) {
             throw g.error("name", "a galaxy name must not be empty");
@@ -145,7 +145,7 @@ public final class GroupReader {
         HaloSpec halo = haloNode == null ? HaloSpec.point(0.0) : halo(haloNode);
         Node starsNode = g.table("stars");
         StarsSpec stars = starsNode == null ? null : stars(starsNode, halo);
-        return new GalaxySpec(name, mass, pos, vel, halo, stars);
+        return new GalaxySpec(name, mass, pos, vel, halo, stars, RunReader.coulombLog(g, null));
     }
 
     static HaloSpec halo(Node h) {

@@ -2,6 +2,7 @@ package org.holdfast.scenario;
 
 import java.util.Arrays;
 
+import org.holdfast.forces.CoulombLog;
 import org.holdfast.run.RunSettings;
 import org.holdfast.run.RunSettings.Scheme;
 
@@ -25,7 +26,7 @@ public final class RunReader {
     public static RunSettings read(Node root, double untilOverrideGyr) {
         Node run = root.requireTable("run");
         run.allowOnly("until_gyr", "start_gyr", "integrator", "accuracy", "step_myr", "snapshot_every_myr",
-                "dark_energy_force", "background_matter", "seed");
+                "dark_energy_force", "background_matter", "seed", "dynamical_friction", "coulomb_log", "merge_within_kpc");
         double start = run.number("start_gyr", 0.0);
         double until = Double.isNaN(untilOverrideGyr) ? run.number("until_gyr") : untilOverrideGyr;
         if (until == start) {
@@ -44,6 +45,39 @@ public final class RunReader {
         boolean de = run.bool("dark_energy_force", true);
         boolean matter = run.bool("background_matter", false);
         long seed = run.integer("seed", Long.MIN_VALUE, Long.MAX_VALUE, 1L);
-        return new RunSettings(start, until, Scheme.of(schemeName), accuracy, step, snap, de, matter, seed);
+        boolean friction = run.bool("dynamical_friction", false);
+        CoulombLog log = coulombLog(run, CoulombLog.DEFAULT);
+        double mergeWithin = Double.NaN;
+        if (run.has("merge_within_kpc")) {
+            mergeWithin = run.number("merge_within_kpc");
+            if (mergeWithin < 0) {
+                throw run.error("merge_within_kpc", "must be >= 0 (0: no mergers), got " + Node.fmt(mergeWithin));
+            }
+            if (until < start && mergeWithin > 0) {
+                throw run.error("merge_within_kpc", "a backward run (until_gyr " + Node.fmt(until) + " before start_gyr "
+                        + Node.fmt(start) + ") cannot have mergers: a merger cannot be undone; remove the key or set it to 0");
+            }
+        }
+        return new RunSettings(start, until, Scheme.of(schemeName), accuracy, step, snap, de, matter, seed,
+                friction, log, mergeWithin);
+    }
+
+    /**
+     * Reads a {@code coulomb_log} key: a positive number, or the name of a published
+     * prescription ({@link CoulombLog#PRESCRIPTIONS}).
+     */
+    public static CoulombLog coulombLog(Node node, CoulombLog fallback) {
+        String key = "coulomb_log";
+        if (!node.has(key)) {
+            return fallback;
+        }
+        if (node.raw(key) instanceof String) {
+            return CoulombLog.named(node.choice(key, CoulombLog.PRESCRIPTIONS));
+        }
+        double v = node.positive(key);
+        if (Double.isInfinite(v)) {
+            throw node.error(key, "must be finite");
+        }
+        return CoulombLog.constant(v);
     }
 }
