@@ -47,7 +47,8 @@ public final class FateReport {
         return switch (f.fate()) {
             case BOUND -> "stays bound to the group";
             case MERGED -> "merges into " + f.with() + " " + when(f.atGyr());
-            case ESCAPED -> "escapes the group " + when(f.atGyr());
+            case ESCAPED -> when(f.atGyr()).equals("now") ? "is not bound to the group: it is already leaving"
+                    : "escapes the group " + when(f.atGyr());
             case RIPPED -> "is torn away by dark energy " + when(f.atGyr());
         };
     }
@@ -72,7 +73,7 @@ public final class FateReport {
             String who = e.members().isEmpty() ? "" : e.members().get(0);
             String what = switch (e.kind()) {
                 case "merged" -> String.join(" and ", e.members()) + " merge";
-                case "escaped" -> who + " escapes";
+                case "escaped" -> who + (when(e.tGyr()).equals("now") ? " is already leaving the group" : " escapes");
                 case "ripped" -> who + " is torn away by dark energy";
                 default -> e.kind() + ": " + String.join(", ", e.members());
             };

@@ -41,14 +41,29 @@ public final class RunPlots {
         double[] t = rec.times();
         int colour = 0;
         double max = 0;
-        for (Map.Entry<String, double[]> e : rec.distancesKpc().entrySet()) {
-            double[] d = e.getValue();
-            Charts.line(c, e.getKey(), t, d, colour++);
+        double min = Double.POSITIVE_INFINITY;
+        for (double[] d : rec.distancesKpc().values()) {
             for (double v : d) {
                 if (v > max) {
                     max = v;
                 }
+                if (v > 0 && v < min) {
+                    min = v;
+                }
             }
+        }
+        // A member far away squashes the bound ones into the axis: then plot on a log scale,
+        // with distances below 1 kpc (a body at the centre) drawn at 1 kpc.
+        boolean log = max > 50 * Math.max(min, 1);
+        c.getStyler().setYAxisLogarithmic(log);
+        for (Map.Entry<String, double[]> e : rec.distancesKpc().entrySet()) {
+            double[] d = log ? atLeast(e.getValue(), 1.0) : e.getValue();
+            var series = Charts.line(c, e.getKey(), t, d, colour);
+            if (colour >= Palette.size()) {
+                series.setLineStyle(new java.awt.BasicStroke(2.2f, java.awt.BasicStroke.CAP_BUTT,
+                        java.awt.BasicStroke.JOIN_MITER, 10f, new float[] {9f, 4f}, 0f));
+            }
+            colour++;
         }
         double[] zg = rec.zeroGravityKpc();
         if (hasFinite(zg)) {
@@ -58,7 +73,7 @@ public final class RunPlots {
         for (RunEvent ev : events) {
             c.addAnnotation(new AnnotationLine(ev.tGyr(), true, false));
             // Stack the labels downward so that events close in time stay readable.
-            double y = max * (0.97 - 0.05 * (row++ % 12));
+            double y = log ? max * Math.pow(0.7, row++ % 12) : max * (0.97 - 0.05 * (row++ % 12));
             c.addAnnotation(new AnnotationText(ev.kind() + ": " + String.join(", ", ev.members()), ev.tGyr(), y, false));
         }
         Charts.savePng(c, file);
@@ -128,6 +143,16 @@ public final class RunPlots {
             }
         }
         return Double.isInfinite(firstBeyond) ? Double.NaN : 0.5 * (lastInfall + firstBeyond);
+    }
+
+    private static double[] atLeast(double[] a, double floor) {
+        double[] out = a.clone();
+        for (int i = 0; i < out.length; i++) {
+            if (out[i] < floor) {
+                out[i] = floor;
+            }
+        }
+        return out;
     }
 
     private static boolean hasFinite(double[] a) {
