@@ -48,6 +48,9 @@ public final class TimingArgument {
     private final double radialKms;
     private final double ageGyr;
 
+    /** How much earlier than the history's first time the Big Bang may lie, Gyr (1 Myr). */
+    private static final double START_SLACK_GYR = 1e-3;
+
     /**
      * @param history the expansion (its k(t) and its range: it must reach back ageGyr)
      * @param separationKpc today's separation, &gt; 0
@@ -61,7 +64,9 @@ public final class TimingArgument {
         if (!Double.isFinite(radialVelocityKms)) {
             throw new IllegalArgumentException("--radial-velocity-kms must be a finite number");
         }
-        if (!(ageGyr > 0) || -ageGyr < history.earliestGyr() - 1e-9) {
+        // The history starts a few kyr after the Big Bang; an age up to the Big Bang itself is
+        // fine, since the last stretch of a radial fall is extrapolated (r ~ t^(2/3)).
+        if (!(ageGyr > 0) || -ageGyr < history.earliestGyr() - START_SLACK_GYR) {
             throw new IllegalArgumentException("--age-gyr must be positive and at most the cosmology's age ("
                     + (-history.earliestGyr()) + " Gyr), got " + ageGyr);
         }
