@@ -34,6 +34,22 @@ class TimingCommandTest {
     }
 
     @Test
+    void theDefaultAgeIsTheCosmologysOwn() throws Exception {
+        // As the README runs it: flat H0 = 70, Omega_m = 0.3, no --age-gyr (13.467 Gyr).
+        CommandRunner.Result r = CommandRunner.run("timing", "--separation-kpc", "784", "--radial-velocity-kms",
+                "-130", "--h0", "70", "--omega-m", "0.3", "--json");
+        assertEquals(0, r.exitCode(), r.err());
+        com.fasterxml.jackson.databind.JsonNode j = new com.fasterxml.jackson.databind.ObjectMapper().readTree(r.out());
+        // A younger universe needs more mass than the 5.32e12 Msun of t = 13.73 Gyr (Kahn & Woltjer
+        // 1959: M ~ r^3 / (G t^2 f(eta))), and the dark-energy force raises it by about 13%
+        // (Partridge, Lahav & Hoffman 2013).
+        double m = j.get("mass_msun").asDouble();
+        double m0 = j.get("mass_msun_no_dark_energy").asDouble();
+        org.junit.jupiter.api.Assertions.assertTrue(m0 > 5.32e12, "no-DE mass " + m0);
+        org.junit.jupiter.api.Assertions.assertEquals(1.13, m / m0, 0.02);
+    }
+
+    @Test
     void anAgeOlderThanTheCosmologyIsRefusedNamingTheOption() {
         CommandRunner.Result r = CommandRunner.run(with("--age-gyr", "30"));
         assertEquals(2, r.exitCode());
