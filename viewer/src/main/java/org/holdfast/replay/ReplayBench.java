@@ -85,7 +85,8 @@ public final class ReplayBench implements BenchSuite {
     }
 
     /** A run folder of invented members on circular paths, written as SnapshotWriter lays it out. */
-    static void write(Path root, int tracers) {
+    /** Writes a synthetic run folder: invented galaxies and tracers on circles, in the snapshot layout. */
+    public static void write(Path root, int tracers) {
         Path snaps = root.resolve(SnapshotWriter.FOLDER);
         SplittableRandom rng = new SplittableRandom(20261201L);
         double[] radius = new double[GALAXIES + tracers];
@@ -158,7 +159,8 @@ public final class ReplayBench implements BenchSuite {
         return out;
     }
 
-    private static void delete(Path root) {
+    /** Deletes a folder written by {@link #write}. */
+    public static void delete(Path root) {
         try (Stream<Path> s = Files.walk(root)) {
             s.sorted(Comparator.reverseOrder()).forEach(p -> p.toFile().delete());
         } catch (IOException e) {
