@@ -20,6 +20,7 @@ public final class TracerField implements AutoCloseable {
     private double[] by = new double[0];
     private double[] bz = new double[0];
     private HaloProfile[] halos = new HaloProfile[0];
+    private int[] firstBad = new int[0];
 
     /** @param threads worker threads; 0 for all cores */
     public TracerField(int threads) {
@@ -99,9 +100,27 @@ public final class TracerField implements AutoCloseable {
         });
     }
 
-    /** Index of the first tracer with a non-finite position or velocity, or -1. */
-    public static int firstNonFinite(Tracers t) {
-        for (int j = 0; j < t.count; j++) {
+    /** Index of the first tracer with a non-finite position or velocity, or -1; on all threads. */
+    public int firstNonFinite(Tracers t) {
+        int chunks = (t.count + CHUNK - 1) / CHUNK;
+        if (firstBad.length < chunks) {
+            firstBad = new int[chunks];
+        }
+        int[] bad = firstBad;
+        forChunks(t.count, (from, to) -> bad[from / CHUNK] = firstNonFinite(t, from, to));
+        if (pool == null || chunks <= 1) {
+            return bad[0];
+        }
+        for (int k = 0; k < chunks; k++) {
+            if (bad[k] >= 0) {
+                return bad[k];
+            }
+        }
+        return -1;
+    }
+
+    private static int firstNonFinite(Tracers t, int from, int to) {
+        for (int j = from; j < to; j++) {
             if (!Double.isFinite(t.x[j] + t.y[j] + t.z[j] + t.vx[j] + t.vy[j] + t.vz[j])) {
                 return j;
             }

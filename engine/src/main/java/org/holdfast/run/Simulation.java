@@ -247,7 +247,7 @@ public final class Simulation implements RunView, AutoCloseable {
             return new StopReason(StopReason.Kind.NON_FINITE, "non-finite position or velocity of '"
                     + system.bodies.name[i] + "' at " + fmt(system.time()) + " Gyr");
         }
-        int j = system.tracers.count > 0 ? TracerField.firstNonFinite(system.tracers) : -1;
+        int j = system.tracers.count > 0 ? system.field.firstNonFinite(system.tracers) : -1;
         if (j >= 0) {
             int host = system.tracers.host[j];
             String whose = host >= 0 && host < system.bodies.count() ? "a star of '" + system.bodies.name[host] + "'"
