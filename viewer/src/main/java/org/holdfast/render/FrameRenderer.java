@@ -94,7 +94,7 @@ public final class FrameRenderer implements AutoCloseable {
         double ez = pose.eyeKpc().z();
         double ref2 = settings.referenceDistanceKpc() * settings.referenceDistanceKpc();
         double minD2 = 1e-4 * ref2;
-        light.clear();
+        // the splat pass clears each band before it draws into it
         splats.draw(scene, view, ex, ey, ez, projection, settings.starBrightness() * ref2,
                 settings.flowBrightness() * ref2, minD2, colours, light, pool);
         drawTrails(scene, ex, ey, ez);

@@ -38,6 +38,11 @@ public final class LightBuffer {
         Arrays.fill(rgb, 0f);
     }
 
+    /** Sets the pixels of rows [rowFrom, rowTo) to black. */
+    public void clearRows(int rowFrom, int rowTo) {
+        Arrays.fill(rgb, 3 * rowFrom * width, 3 * rowTo * width, 0f);
+    }
+
     /** Adds light to one pixel; pixels outside the frame are ignored. */
     public void add(int x, int y, float r, float g, float b) {
         if (x < 0 || y < 0 || x >= width || y >= height) {

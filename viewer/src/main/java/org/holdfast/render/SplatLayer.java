@@ -140,9 +140,11 @@ final class SplatLayer {
         used[list] = k + STRIDE;
     }
 
+    /** Clears the band's rows (so the frame is cleared on all threads too), then draws its splats. */
     private void drawBand(int band, LightBuffer light) {
         int rowFrom = band * BAND_ROWS;
         int rowTo = Math.min(height, rowFrom + BAND_ROWS);
+        light.clearRows(rowFrom, rowTo);
         for (int c = 0; c < CHUNKS; c++) {
             int list = c * bands + band;
             float[] p = lists[list];
