@@ -19,14 +19,7 @@ final class ExpansionReport {
     static Map<String, Object> json(ExpansionTable t, List<double[]> samples) {
         Cosmology c = t.cosmology();
         Map<String, Object> m = ExpansionCommand.map();
-        Map<String, Object> cos = ExpansionCommand.map();
-        cos.put("h0_kms_mpc", c.h0Kms());
-        cos.put("omega_m", c.omegaM());
-        cos.put("omega_r", c.omegaR());
-        cos.put("omega_k", c.omegaK());
-        cos.put("omega_de", c.omegaDe());
-        cos.put("dark_energy", c.darkEnergy().describe());
-        m.put("cosmology", cos);
+        m.put("cosmology", org.holdfast.output.Provenance.cosmology(c, null));
         m.put("age_gyr", t.ageGyr());
         m.put("rip_gyr", ExpansionCommand.orNull(t.ripGyr()));
         m.put("max_expansion_gyr", ExpansionCommand.orNull(t.maxExpansionGyr()));
