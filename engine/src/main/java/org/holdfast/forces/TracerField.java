@@ -1,7 +1,8 @@
 package org.holdfast.forces;
 
 import java.util.concurrent.ForkJoinPool;
-import java.util.stream.IntStream;
+import java.util.concurrent.ForkJoinTask;
+import java.util.concurrent.atomic.AtomicInteger;
 
 import org.holdfast.halos.HaloProfile;
 
@@ -25,7 +26,7 @@ public final class TracerField implements AutoCloseable {
     /** @param threads worker threads; 0 for all cores */
     public TracerField(int threads) {
         this.threads = threads > 0 ? threads : Runtime.getRuntime().availableProcessors();
-        this.pool = this.threads == 1 ? null : new ForkJoinPool(this.threads);
+        this.pool = this.threads == 1 ? null : new ForkJoinPool(this.threads - 1);
     }
 
     /** Threads in use. */
@@ -140,8 +141,22 @@ public final class TracerField implements AutoCloseable {
             work.run(0, count);
             return;
         }
-        pool.submit(() -> IntStream.range(0, chunks).parallel()
-                .forEach(k -> work.run(k * CHUNK, Math.min(count, (k + 1) * CHUNK)))).join();
+        // each thread takes the next free chunk until none is left; the caller works too
+        AtomicInteger next = new AtomicInteger();
+        Runnable worker = () -> {
+            for (int k = next.getAndIncrement(); k < chunks; k = next.getAndIncrement()) {
+                work.run(k * CHUNK, Math.min(count, (k + 1) * CHUNK));
+            }
+        };
+        int helpers = Math.min(threads, chunks) - 1;
+        ForkJoinTask<?>[] running = new ForkJoinTask<?>[helpers];
+        for (int i = 0; i < helpers; i++) {
+            running[i] = pool.submit(worker);
+        }
+        worker.run();
+        for (ForkJoinTask<?> task : running) {
+            task.join();
+        }
     }
 
     @Override
