@@ -3,28 +3,17 @@ package org.holdfast.cli;
 import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.ArrayList;
-import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
-import java.util.Map;
 import java.util.concurrent.Callable;
 
 import org.holdfast.fates.FateReport;
 import org.holdfast.fates.FateRun;
-import org.holdfast.fates.MemberFate;
-import org.holdfast.group.GalaxySpec;
-import org.holdfast.output.Provenance;
 import org.holdfast.output.RunFolder;
-import org.holdfast.output.RunPlots;
-import org.holdfast.output.RunRecorder;
-import org.holdfast.output.SnapshotWriter;
-import org.holdfast.output.TrackWriter;
-import org.holdfast.run.RunEvent;
+import org.holdfast.output.RunWriter;
 import org.holdfast.run.RunObserver;
-import org.holdfast.run.RunView;
 import org.holdfast.run.Simulation;
 import org.holdfast.scenario.Scenario;
-import org.holdfast.units.Units;
 
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -83,28 +72,14 @@ public final class EvolveCommand implements Callable<Integer> {
             }
             o.flush();
         }
-        RunFolder folder = RunFolder.create(dirPath, s.file());
-        folder.writeJson(RunFolder.RESOLVED, resolved(s));
-        RunRecorder recorder = new RunRecorder(s.expansion(), s.run().darkEnergyForce(),
-                FateRun.analysisIntervalGyr(s.run()));
-        List<RunObserver> observers = new ArrayList<>();
-        observers.add(recorder);
-        observers.add(new SnapshotWriter(folder.dir(), s.name(), Version.number()));
-        TrackWriter tracks = new TrackWriter(folder.dir());
-        observers.add(tracks);
+        RunWriter writer = new RunWriter(s, dirPath, Version.number());
+        List<RunObserver> watchers = new ArrayList<>();
         if (!quiet) {
-            observers.add(new RunProgress(o, RunProgress.onTerminal(), s.run().startGyr(), s.run().untilGyr()));
+            watchers.add(new RunProgress(o, RunProgress.onTerminal(), s.run().startGyr(), s.run().untilGyr()));
         }
-        FateRun.Outcome r;
-        try {
-            r = FateRun.run(s, sim, observers);
-        } finally {
-            tracks.close();
-        }
-        folder.writeJson(RunFolder.SUMMARY, summary(s, r));
-        RunPlots.write(folder.dir(), recorder, r.events(), s.name());
+        FateRun.Outcome r = writer.run(sim, watchers);
         if (!quiet) {
-            report(o, s, r, folder.dir());
+            report(o, s, r, writer.dir());
         }
         r.simulation().close();
         return 0;
@@ -125,78 +100,6 @@ public final class EvolveCommand implements Callable<Integer> {
         o.println();
         o.println("Run folder: " + dir + " (summary.json, tracks.csv, snapshots/, distances.png, energy.png, hubble.png)");
         o.flush();
-    }
-
-    private static Map<String, Object> resolved(Scenario s) {
-        Map<String, Object> m = new LinkedHashMap<>();
-        m.put("scenario", s.name());
-        m.put("description", s.description());
-        m.put("file", s.file().toString());
-        m.put("version", Version.number());
-        m.put("cosmology", Provenance.cosmology(s.cosmology(), s.expansion()));
-        m.put("run", Provenance.run(s.run()));
-        List<Map<String, Object>> gs = new ArrayList<>();
-        for (GalaxySpec g : s.group().galaxies()) {
-            gs.add(Provenance.member(g, g.positionKpc(), g.velocityKms()));
-        }
-        m.put("galaxies_as_given", gs);
-        m.put("tracers", Provenance.tracers(s));
-        m.put("uncertain", Provenance.uncertain(s.uncertain()));
-        m.put("warnings", s.warnings());
-        return m;
-    }
-
-    private static Map<String, Object> summary(Scenario s, FateRun.Outcome r) {
-        RunView v = r.simulation();
-        Map<String, Object> m = new LinkedHashMap<>();
-        m.put("scenario", s.name());
-        m.put("version", Version.number());
-        m.put("start_gyr", s.run().startGyr());
-        m.put("end_gyr", r.result().endGyr());
-        m.put("stop_reason", r.result().reason().key());
-        m.put("stop_message", r.result().reason().message());
-        m.put("steps", r.result().steps());
-        m.put("wall_s", r.result().wallSeconds());
-        m.put("energy_budget_error", r.result().maxEnergyResidual());
-        m.put("frame", Map.of("name", "centre of mass",
-                "offset_kpc", v.frameOffsetKpc(),
-                "velocity_kms", scaled(v.frameVelocity(), Units.KPC_PER_GYR_TO_KMS)));
-        m.put("cosmology", Provenance.cosmology(s.cosmology(), s.expansion()));
-        m.put("run", Provenance.run(s.run()));
-        m.put("verdict", r.verdict().key());
-        m.put("bound_until_gyr", Provenance.finiteOrNull(r.boundUntilGyr()));
-        List<Map<String, Object>> members = new ArrayList<>();
-        for (MemberFate f : r.members()) {
-            Map<String, Object> e = new LinkedHashMap<>();
-            e.put("name", f.name());
-            e.put("fate", f.fate().key());
-            e.put("at_gyr", Provenance.finiteOrNull(f.atGyr()));
-            e.put("with", f.with());
-            members.add(e);
-        }
-        m.put("members", members);
-        List<Map<String, Object>> events = new ArrayList<>();
-        for (RunEvent ev : r.events()) {
-            events.add(Map.of("t_gyr", ev.tGyr(), "kind", ev.kind(), "members", ev.members()));
-        }
-        m.put("events", events);
-        List<Map<String, Object>> finals = new ArrayList<>();
-        double k = Units.KPC_PER_GYR_TO_KMS;
-        for (int i = 0; i < v.bodyCount(); i++) {
-            Map<String, Object> g = new LinkedHashMap<>();
-            g.put("name", v.bodyName(i));
-            g.put("mass_msun", v.bodyMass()[i]);
-            g.put("position_kpc", new double[] {v.bodyX()[i], v.bodyY()[i], v.bodyZ()[i]});
-            g.put("velocity_kms", new double[] {v.bodyVx()[i] * k, v.bodyVy()[i] * k, v.bodyVz()[i] * k});
-            finals.add(g);
-        }
-        m.put("galaxies", finals);
-        m.put("uncertain", Provenance.uncertain(s.uncertain()));
-        return m;
-    }
-
-    private static double[] scaled(double[] a, double f) {
-        return new double[] {a[0] * f, a[1] * f, a[2] * f};
     }
 
     private static String fmt(double t) {

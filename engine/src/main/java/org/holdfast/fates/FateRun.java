@@ -62,7 +62,19 @@ public final class FateRun {
 
     /** Runs a simulation built from the scenario with the fate tracker and the given observers. */
     public static Outcome run(Scenario s, Simulation sim, List<RunObserver> observers) {
-        FateTracker fates = new FateTracker(s.expansion(), s.run().darkEnergyForce(), analysisIntervalGyr(s.run()));
+        return run(s, sim, tracker(s), observers);
+    }
+
+    /** The fate tracker of a scenario's run. */
+    public static FateTracker tracker(Scenario s) {
+        return new FateTracker(s.expansion(), s.run().darkEnergyForce(), analysisIntervalGyr(s.run()));
+    }
+
+    /**
+     * Runs a simulation with the given fate tracker (from {@link #tracker}, so that an observer
+     * can ask it for the events so far) watching first, then the other observers.
+     */
+    public static Outcome run(Scenario s, Simulation sim, FateTracker fates, List<RunObserver> observers) {
         List<RunObserver> all = new ArrayList<>();
         all.add(fates);
         all.addAll(observers);

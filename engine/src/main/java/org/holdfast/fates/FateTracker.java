@@ -230,7 +230,11 @@ public final class FateTracker implements RunObserver {
         return mainHasPair ? Double.NaN : mainLostPairAt;
     }
 
-    /** Escape and rip events in time order, and the simulation's own events merged in. */
+    /**
+     * Escape and rip events in time order, and the simulation's own events merged in. During a
+     * run these are the events as they stand at the last analysis: a member that rejoins the
+     * main group loses its escape.
+     */
     public List<RunEvent> events(RunView run) {
         List<RunEvent> all = new ArrayList<>(run.events());
         for (Map.Entry<String, Track> en : tracks.entrySet()) {
