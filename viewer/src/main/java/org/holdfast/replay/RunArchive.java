@@ -36,27 +36,23 @@ import io.jhdf.api.Attribute;
 public final class RunArchive {
 
     private final Path dir;
-    private final Path[] files;
-    private final double[] times;
     private final List<String> initialNames;
-    private final List<FateEvent> events;
-    private final double ripGyr;
-    private final boolean stoppedBeforeRip;
-    private final Map<String, double[][]> tracks;
+    private Path[] files;
+    private double[] times;
+    private List<FateEvent> events;
+    private boolean summaryRead;
+    private double ripGyr;
+    private boolean stoppedBeforeRip;
+    private Map<String, double[][]> tracks;
     private final Snapshot[] cache = new Snapshot[2];
     private final int[] cached = {-1, -1};
     private int nextSlot;
 
-    private RunArchive(Path dir, Path[] files, double[] times, List<String> initialNames, List<FateEvent> events,
-            double ripGyr, boolean stoppedBeforeRip, Map<String, double[][]> tracks) {
+    private RunArchive(Path dir, Path[] files, double[] times, List<String> initialNames) {
         this.dir = dir;
         this.files = files;
         this.times = times;
         this.initialNames = initialNames;
-        this.events = events;
-        this.ripGyr = ripGyr;
-        this.stoppedBeforeRip = stoppedBeforeRip;
-        this.tracks = tracks;
     }
 
     /**
@@ -73,37 +69,92 @@ public final class RunArchive {
             throw new ScenarioException(dir.toString(), null, "no snapshots (" + SnapshotWriter.FOLDER
                     + "/state_*.h5) in this folder; make a run folder with holdfast evolve");
         }
-        Path[] files = found.toArray(Path[]::new);
-        double[] times = new double[files.length];
-        List<String> names = List.of();
-        for (int i = 0; i < files.length; i++) {
-            try (HdfFile h = new HdfFile(files[i])) {
-                times[i] = number(h.getAttribute("t_gyr"), files[i], "t_gyr");
-                if (i == 0) {
-                    names = initialNames(h);
-                }
+        List<String> names;
+        try (HdfFile h = new HdfFile(found.get(0))) {
+            names = initialNames(h);
+        } catch (RuntimeException e) {
+            throw new ScenarioException(found.get(0).toString(), null, "not a readable snapshot: " + e.getMessage());
+        }
+        RunArchive run = new RunArchive(dir, new Path[0], new double[0], names);
+        run.addSnapshots(found);
+        run.readSummary();
+        run.tracks = readTracks(dir, false);
+        return run;
+    }
+
+    /**
+     * Takes in what a run still being written has added since the last look: new snapshots,
+     * the rows of {@code tracks.csv} written so far (a row still being written is left for next
+     * time), and the summary once it appears. Indices of known snapshots do not change.
+     *
+     * @return whether anything new was found
+     */
+    public boolean refresh() {
+        List<Path> found = snapshotFiles(dir);
+        boolean more = found.size() > files.length;
+        if (more) {
+            addSnapshots(found);
+            tracks = readTracks(dir, true);
+        }
+        boolean summary = !summaryRead && readSummary();
+        if (summary) {
+            tracks = readTracks(dir, false);
+        }
+        return more || summary;
+    }
+
+    /** Whether the run's summary has been read: the run is complete. */
+    public boolean complete() {
+        return summaryRead;
+    }
+
+    /** Fate events of a run still going, as they stand, used until the summary exists. */
+    void useEventsUntilSummary(List<FateEvent> provisional) {
+        if (!summaryRead) {
+            List<FateEvent> sorted = new ArrayList<>(provisional);
+            sorted.sort((a, b) -> Double.compare(a.tGyr(), b.tGyr()));
+            events = List.copyOf(sorted);
+        }
+    }
+
+    /** Reads the times of the snapshots in {@code found} beyond those already known. */
+    private void addSnapshots(List<Path> found) {
+        int known = files.length;
+        Path[] f = found.toArray(Path[]::new);
+        double[] t = java.util.Arrays.copyOf(times, f.length);
+        for (int i = known; i < f.length; i++) {
+            try (HdfFile h = new HdfFile(f[i])) {
+                t[i] = number(h.getAttribute("t_gyr"), f[i], "t_gyr");
             } catch (ScenarioException e) {
                 throw e;
             } catch (RuntimeException e) {
-                throw new ScenarioException(files[i].toString(), null, "not a readable snapshot: " + e.getMessage());
+                throw new ScenarioException(f[i].toString(), null, "not a readable snapshot: " + e.getMessage());
             }
-            if (i > 0 && !((times[i] - times[i - 1]) * (times[1] - times[0]) > 0)) {
-                throw new ScenarioException(files[i].toString(), "t_gyr", "snapshot times are not in order");
+            if (i > 0 && !((t[i] - t[i - 1]) * (i > 1 ? t[1] - t[0] : t[i] - t[i - 1]) > 0)) {
+                throw new ScenarioException(f[i].toString(), "t_gyr", "snapshot times are not in order");
             }
         }
+        files = f;
+        times = t;
+    }
+
+    /** Reads events, rip time and stop reason from summary.json; false when there is none yet. */
+    private boolean readSummary() {
         Path summary = dir.resolve(RunFolder.SUMMARY);
-        List<FateEvent> events = new ArrayList<>();
+        List<FateEvent> found = new ArrayList<>();
         double rip = Double.NaN;
         boolean beforeRip = false;
-        if (Files.isRegularFile(summary)) {
+        boolean present = Files.isRegularFile(summary);
+        if (present) {
             try {
                 JsonNode root = new ObjectMapper().readTree(summary.toFile());
                 for (JsonNode e : root.path("events")) {
-                    FateKind kind = kind(e.path("kind").asText());
                     List<String> members = new ArrayList<>();
                     e.path("members").forEach(m -> members.add(m.asText()));
-                    if (kind != null && !members.isEmpty() && e.path("t_gyr").isNumber()) {
-                        events.add(new FateEvent(e.path("t_gyr").asDouble(), kind, members));
+                    FateEvent event = e.path("t_gyr").isNumber()
+                            ? event(e.path("kind").asText(), e.path("t_gyr").asDouble(), members) : null;
+                    if (event != null) {
+                        found.add(event);
                     }
                 }
                 JsonNode r = root.path("cosmology").path("rip_gyr");
@@ -113,8 +164,14 @@ public final class RunArchive {
                 throw new ScenarioException(summary.toString(), null, "not readable JSON: " + e.getMessage());
             }
         }
-        events.sort((a, b) -> Double.compare(a.tGyr(), b.tGyr()));
-        return new RunArchive(dir, files, times, names, List.copyOf(events), rip, beforeRip, readTracks(dir));
+        found.sort((a, b) -> Double.compare(a.tGyr(), b.tGyr()));
+        if (present || events == null) {
+            events = List.copyOf(found);
+            ripGyr = rip;
+            stoppedBeforeRip = beforeRip;
+        }
+        summaryRead = present;
+        return present;
     }
 
     private static List<Path> snapshotFiles(Path dir) {
@@ -154,23 +211,35 @@ public final class RunArchive {
         throw new ScenarioException(file.toString(), key, "expected a number, got " + v);
     }
 
-    private static FateKind kind(String key) {
-        return switch (key) {
+    /**
+     * A fate event from its key in summary.json ("merged", "escaped", "ripped") and members;
+     * null for other kinds or no members.
+     */
+    static FateEvent event(String kindKey, double tGyr, List<String> members) {
+        FateKind kind = switch (kindKey) {
             case "merged" -> FateKind.MERGED;
             case "escaped" -> FateKind.ESCAPED;
             case "ripped" -> FateKind.RIPPED;
             default -> null;
         };
+        return kind == null || members.isEmpty() ? null : new FateEvent(tGyr, kind, members);
     }
 
-    /** Saved centre paths per galaxy name: rows t, x, y, z; empty when there is no tracks.csv. */
-    private static Map<String, double[][]> readTracks(Path dir) {
+    /**
+     * Saved centre paths per galaxy name: rows t, x, y, z; empty when there is no tracks.csv.
+     *
+     * @param growing the file may still be written: stop at the first row that is not whole
+     */
+    private static Map<String, double[][]> readTracks(Path dir, boolean growing) {
         Path file = dir.resolve(TrackWriter.FILE);
         Map<String, List<double[]>> rows = new LinkedHashMap<>();
         if (Files.isRegularFile(file)) {
             CSVFormat f = CSVFormat.DEFAULT.builder().setHeader().setSkipHeaderRecord(true).get();
             try (Reader r = Files.newBufferedReader(file); CSVParser p = CSVParser.parse(r, f)) {
                 for (CSVRecord rec : p) {
+                    if (growing && !rec.isConsistent()) {
+                        break;
+                    }
                     rows.computeIfAbsent(rec.get("name"), k -> new ArrayList<>()).add(new double[] {
                         Double.parseDouble(rec.get("t_gyr")), Double.parseDouble(rec.get("x_kpc")),
                         Double.parseDouble(rec.get("y_kpc")), Double.parseDouble(rec.get("z_kpc"))});

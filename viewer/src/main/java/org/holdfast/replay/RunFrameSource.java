@@ -37,8 +37,11 @@ public final class RunFrameSource implements FrameSource {
 
     private final ReplayScene scene;
     private final AutoCloseable owned;
+    private final LiveRun live;
     private final CameraPose pose = new CameraPose();
-    private final double[] eventTimes;
+    private double[] eventTimes;
+    private int snapshotsSeen;
+    private boolean endSeen;
     private FrameRenderer renderer;
     private String rendererKey = "";
 
@@ -46,9 +49,50 @@ public final class RunFrameSource implements FrameSource {
      * @param owned closed with this source (a temporary run), or null
      */
     public RunFrameSource(RunArchive run, AutoCloseable owned) {
+        this(run, owned, null);
+    }
+
+    private RunFrameSource(RunArchive run, AutoCloseable owned, LiveRun live) {
         this.scene = new ReplayScene(run);
         this.owned = owned;
-        this.eventTimes = run.events().stream().mapToDouble(FateEvent::tGyr).sorted().toArray();
+        this.live = live;
+        this.snapshotsSeen = run.snapshotCount();
+        this.eventTimes = eventTimes(run);
+    }
+
+    /**
+     * The frames of a scenario evolving as it plays: the span grows with each snapshot the run
+     * writes, and the live run is closed (cancelled if still going) with this source.
+     */
+    public static RunFrameSource following(LiveRun live) {
+        try {
+            return new RunFrameSource(RunArchive.open(live.dir()), live, live);
+        } catch (RuntimeException e) {
+            live.close();
+            throw e;
+        }
+    }
+
+    private static double[] eventTimes(RunArchive run) {
+        return run.events().stream().mapToDouble(FateEvent::tGyr).sorted().toArray();
+    }
+
+    /** Takes in what a live run has written since the last look; cheap when nothing is new. */
+    private void catchUp() {
+        if (live == null || endSeen) {
+            return;
+        }
+        boolean ended = live.finished();
+        int written = live.snapshotsWritten();
+        if (written == snapshotsSeen && !ended) {
+            return;
+        }
+        RunArchive run = scene.run();
+        run.refresh();
+        run.useEventsUntilSummary(live.eventsSoFar());
+        snapshotsSeen = written;
+        endSeen = ended;
+        eventTimes = eventTimes(run);
     }
 
     /** The pose of the window's orbit camera: at its eye, facing its target, +z towards the top. */
@@ -75,6 +119,7 @@ public final class RunFrameSource implements FrameSource {
 
     @Override
     public void draw(ViewState view, int width, int height, int[] argb) {
+        catchUp();
         Camera c = view.camera();
         boolean dome = c.projection() == Projection.DOME;
         int side = Math.min(width, height);
@@ -127,17 +172,49 @@ public final class RunFrameSource implements FrameSource {
 
     @Override
     public double startGyr() {
+        catchUp();
         return scene.run().earliestGyr();
     }
 
     @Override
     public double endGyr() {
+        catchUp();
         return scene.run().latestGyr();
     }
 
     @Override
     public double[] eventTimesGyr() {
+        catchUp();
         return eventTimes.clone();
+    }
+
+    @Override
+    public boolean growing() {
+        catchUp();
+        return live != null && !scene.run().complete() && live.failure() == null;
+    }
+
+    @Override
+    public double runStartGyr() {
+        return live != null ? live.startGyr() : scene.run().firstGyr();
+    }
+
+    @Override
+    public double runEndGyr() {
+        return live != null && growing() ? live.untilGyr() : scene.run().lastGyr();
+    }
+
+    @Override
+    public void awaitGyr(double tGyr) {
+        if (live != null) {
+            live.awaitGyr(tGyr);
+            catchUp();
+        }
+    }
+
+    @Override
+    public String status() {
+        return live == null ? "" : live.status();
     }
 
     @Override

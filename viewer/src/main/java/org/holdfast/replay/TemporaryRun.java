@@ -75,8 +75,9 @@ public final class TemporaryRun implements AutoCloseable {
         delete(dir.getParent());
     }
 
-    private static void delete(Path root) {
-        if (!Files.exists(root)) {
+    /** Removes a folder and everything in it; a folder that will not go is left behind. */
+    static void delete(Path root) {
+        if (root == null || !Files.exists(root)) {
             return;
         }
         try (Stream<Path> s = Files.walk(root)) {

@@ -42,6 +42,33 @@ public interface FrameSource extends AutoCloseable {
         return 2000.0;
     }
 
+    /**
+     * Whether the span is still growing: a scenario evolving as it plays. The clock waits at
+     * the growing end instead of stopping there.
+     */
+    default boolean growing() {
+        return false;
+    }
+
+    /** Where the run begins, Gyr (for a run into the past, the later end of the span). */
+    default double runStartGyr() {
+        return startGyr();
+    }
+
+    /** Where the run ends, or is heading while it grows, Gyr. */
+    default double runEndGyr() {
+        return endGyr();
+    }
+
+    /** Waits until the span reaches {@code tGyr} or stops growing; returns at once when not growing. */
+    default void awaitGyr(double tGyr) {
+    }
+
+    /** One line on the state of the source (a run's progress) for the title bar; "" for none. */
+    default String status() {
+        return "";
+    }
+
     /** Releases what the source holds (files, a live run). */
     @Override
     default void close() {

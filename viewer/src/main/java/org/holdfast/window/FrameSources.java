@@ -4,14 +4,14 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
 
+import org.holdfast.replay.LiveRun;
 import org.holdfast.replay.RunArchive;
 import org.holdfast.replay.RunFrameSource;
-import org.holdfast.replay.TemporaryRun;
 import org.holdfast.scenario.ScenarioException;
 
 /**
  * Opens the frame source for what {@code holdfast view} was given: a finished run's folder
- * (replayed from its snapshots) or a scenario file (evolved first, then replayed). This is
+ * (replayed from its snapshots) or a scenario file (evolved while it plays). This is
  * the one place that connects the window to the renderer and the engine.
  */
 public final class FrameSources {
@@ -21,22 +21,19 @@ public final class FrameSources {
 
     /**
      * Opens a source for {@code input}: a run folder is replayed from its snapshots; a scenario
-     * file is first evolved into a temporary run folder (removed when the source closes) and
-     * then replayed, so the clock can run both ways.
+     * file is evolved on a background thread as it plays, into a temporary run folder (removed
+     * when the source closes) or into {@code keep}.
+     *
+     * @param sets {@code --set KEY=VALUE} overrides for a scenario
+     * @param keep run folder to write and keep for a scenario, or null
      */
-    public static FrameSource open(Path input) throws CannotOpenException {
+    public static FrameSource open(Path input, List<String> sets, Path keep) throws CannotOpenException {
         try {
             if (Files.isDirectory(input)) {
                 return new RunFrameSource(RunArchive.open(input), null);
             }
             if (input.getFileName() != null && input.getFileName().toString().endsWith(".toml")) {
-                TemporaryRun run = TemporaryRun.evolve(input, List.of(), null);
-                try {
-                    return new RunFrameSource(RunArchive.open(run.dir()), run);
-                } catch (RuntimeException e) {
-                    run.close();
-                    throw e;
-                }
+                return RunFrameSource.following(LiveRun.start(input, sets, keep));
             }
         } catch (ScenarioException e) {
             throw new CannotOpenException(e.getMessage());
@@ -47,7 +44,11 @@ public final class FrameSources {
     /** Opens a source for an input path; {@link FrameSources#open} is the real one. */
     @FunctionalInterface
     public interface SourceOpener {
-        FrameSource open(Path input) throws CannotOpenException;
+        /**
+         * @param sets {@code --set} overrides for a scenario
+         * @param keep {@code --out} folder to keep a scenario's run in, or null
+         */
+        FrameSource open(Path input, List<String> sets, Path keep) throws CannotOpenException;
     }
 
     /** The input cannot be shown; the message says why, in one line. */

@@ -3,6 +3,8 @@ package org.holdfast.window;
 import java.io.PrintWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
 import java.util.Locale;
 import java.util.concurrent.Callable;
 
@@ -26,13 +28,15 @@ import picocli.CommandLine.Spec;
         header = "Watch and steer a run in a window.",
         description = {
             "Opens a window on a finished run (its folder of snapshots) or on a scenario,",
-            "which is first evolved into a temporary run folder (removed on quitting) so",
-            "the clock can run both ways. Drag to turn the camera, wheel to zoom, H in the",
-            "window (or --keys) for the keys. With --frames it shows that many frames and",
-            "quits: for rehearsals and tests.",
+            "which evolves on a background thread as it plays: the clock waits where the run",
+            "has got to, and everything already evolved can be replayed both ways. The run",
+            "goes to a temporary folder, removed on quitting, or to --out DIR to keep it.",
+            "Drag to turn the camera, wheel to zoom, H in the window (or --keys) for the",
+            "keys. With --frames it shows that many frames and quits: for rehearsals and tests.",
             "",
             "Examples:",
             "  holdfast view runs/tessera-trio",
+            "  holdfast view scenarios/hollin-group.toml --play --set cosmology.dark_energy.w0=-1.5",
             "  holdfast view runs/tessera-trio --at-gyr 4.5 --camera 30,15,800 \\",
             "      --frames 1 --screenshot trio-4.5.png",
             "  holdfast view --keys"
@@ -45,6 +49,14 @@ public final class ViewCommand implements Callable<Integer> {
     @Parameters(index = "0", arity = "0..1", paramLabel = "RUN_DIR|SCENARIO",
             description = "A run folder to replay or a scenario (.toml) to evolve first.")
     Path input;
+
+    @Option(names = "--set", paramLabel = "KEY=VALUE",
+            description = "For a scenario: override a value by its dotted key (repeatable), as in holdfast evolve.")
+    List<String> sets = new ArrayList<>();
+
+    @Option(names = "--out", paramLabel = "DIR",
+            description = "For a scenario: keep its run folder here (must not exist or be empty) instead of a temporary one.")
+    Path outDir;
 
     @Option(names = "--size", paramLabel = "WxH", defaultValue = "1280x720",
             description = "Window size in pixels (default ${DEFAULT-VALUE}).")
@@ -137,11 +149,17 @@ public final class ViewCommand implements Callable<Integer> {
         if (!Files.exists(input)) {
             return fail("RUN_DIR|SCENARIO: '" + input + "' does not exist");
         }
-        if (!Files.isDirectory(input) && input.getFileName().toString().endsWith(".toml")) {
-            out.println("evolving " + input + " into a temporary run folder first ...");
-            out.flush();
+        boolean scenario = !Files.isDirectory(input) && input.getFileName().toString().endsWith(".toml");
+        if (!scenario && (!sets.isEmpty() || outDir != null)) {
+            return fail((outDir != null ? "--out" : "--set") + ": only for a scenario, and '" + input
+                    + "' is a run folder");
         }
-        try (FrameSource source = opener.open(input)) {
+        try (FrameSource source = opener.open(input, sets, outDir)) {
+            if (scenario && source.growing()) {
+                out.println("evolving " + input + " as it plays, into "
+                        + (outDir != null ? outDir : "a temporary run folder (removed on quitting)"));
+                out.flush();
+            }
             ViewState start;
             try {
                 start = startView(source, cam);
@@ -160,11 +178,15 @@ public final class ViewCommand implements Callable<Integer> {
             ViewLoop.Outcome o = loop.run();
             if (screenshot != null && o.screenshot() != null && !o.closedEarly()) {
                 out.println("saved " + o.screenshot());
-                out.flush();
             }
+            if (scenario) {
+                source.close(); // stops a run still going, so the line below says where it ended
+                out.println(source.status() + (outDir != null ? "; run folder " + outDir : ""));
+            }
+            out.flush();
             return 0;
         } catch (CannotOpenException e) {
-            return fail(e.getMessage() + "; holdfast render makes films and stills without a window");
+            return fail(e.getMessage());
         } catch (NoDisplayException e) {
             return fail(e.getMessage() + "; use holdfast render to make pictures without a window");
         }
@@ -207,24 +229,35 @@ public final class ViewCommand implements Callable<Integer> {
         }
     }
 
-    /** The first view: the camera asked for (or an overview), the clock where asked. */
+    /**
+     * The first view: the camera asked for (or an overview), the clock where asked. A run still
+     * evolving starts at its beginning, running towards its end; --at-gyr there waits until the
+     * run has got that far.
+     */
     private ViewState startView(FrameSource source, CameraSpec cam) throws BadOption {
-        double t0 = source.startGyr();
-        double t1 = source.endGyr();
-        double t = t0;
+        boolean growing = source.growing();
+        double from = growing ? source.runStartGyr() : source.startGyr();
+        double to = growing ? source.runEndGyr() : source.endGyr();
+        double lo = Math.min(from, to);
+        double hi = Math.max(from, to);
+        double t = from;
         if (atGyr != null) {
-            if (!(atGyr >= t0 && atGyr <= t1)) {
+            if (!(atGyr >= lo && atGyr <= hi)) {
                 throw new BadOption("--at-gyr: " + plain(atGyr) + " lies outside this run, which spans "
-                        + plain(t0) + " to " + plain(t1) + " Gyr");
+                        + plain(lo) + " to " + plain(hi) + " Gyr");
+            }
+            source.awaitGyr(atGyr);
+            if (!(atGyr >= source.startGyr() && atGyr <= source.endGyr())) {
+                throw new BadOption("--at-gyr: " + plain(atGyr) + " was not reached; " + source.status());
             }
             t = atGyr;
         }
         double rate = rateGyrPerS != null ? rateGyrPerS
-                : Math.max(Clock.MIN_RATE_GYR_PER_S, Math.min(Clock.MAX_RATE_GYR_PER_S, (t1 - t0) / 30.0));
+                : Math.max(Clock.MIN_RATE_GYR_PER_S, Math.min(Clock.MAX_RATE_GYR_PER_S, (hi - lo) / 30.0));
         Projection p = dome ? Projection.DOME : Projection.FLAT;
         Camera c = cam != null ? cam.camera(p)
                 : new Camera(0, 0, 0, clampDistance(source.overviewDistanceKpc()), 30, 20, Camera.DEFAULT_FOV_DEG, p);
-        return ViewState.of(c, new Clock(t, rate, true, play));
+        return ViewState.of(c, new Clock(t, rate, !growing || to >= from, play));
     }
 
     private static String plain(double v) {

@@ -9,6 +9,6 @@ public final class PatternViewMain {
     }
 
     public static void main(String[] args) {
-        System.exit(HoldfastFull.commandLine(input -> new PatternSource()).execute(args));
+        System.exit(HoldfastFull.commandLine((input, sets, keep) -> new PatternSource()).execute(args));
     }
 }

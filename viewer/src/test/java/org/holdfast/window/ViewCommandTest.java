@@ -19,7 +19,7 @@ class ViewCommandTest {
     Path dir;
 
     private ViewRun.Result pattern(String... args) {
-        return ViewRun.run(input -> new PatternSource(), args);
+        return ViewRun.run((input, sets, keep) -> new PatternSource(), args);
     }
 
     private static void assertOneLineNaming(ViewRun.Result r, String... parts) {
@@ -72,12 +72,28 @@ class ViewCommandTest {
     void realSourcesNameWhatTheyCannotOpen() throws IOException {
         Path run = Files.createDirectory(dir.resolve("tessera-run"));
         ViewRun.Result r = ViewRun.run(FrameSources::open, "view", run.toString());
-        assertOneLineNaming(r, "tessera-run", "no snapshots", "holdfast render");
+        assertOneLineNaming(r, "tessera-run", "no snapshots", "holdfast evolve");
         Path scenario = Files.writeString(dir.resolve("ombrine.toml"), "# empty\n");
         assertOneLineNaming(ViewRun.run(FrameSources::open, "view", scenario.toString()), "ombrine.toml",
                 "missing required table [cosmology]");
         Path other = Files.writeString(dir.resolve("notes.txt"), "x\n");
         assertOneLineNaming(ViewRun.run(FrameSources::open, "view", other.toString()), "neither a run folder nor a scenario");
+    }
+
+    @Test
+    void scenarioOptionsAreRefusedForARunFolder() {
+        String d = dir.toString();
+        assertOneLineNaming(pattern("view", d, "--out", dir.resolve("x").toString()), "--out", "only for a scenario");
+        assertOneLineNaming(pattern("view", d, "--set", "run.until_gyr=3"), "--set", "only for a scenario");
+    }
+
+    @Test
+    void aBadOverrideOfALiveScenarioNamesTheKey() {
+        Path out = dir.resolve("never");
+        ViewRun.Result r = ViewRun.run(FrameSources::open, "view", org.holdfast.replay.DemoRun.SCENARIO.toString(),
+                "--set", "galaxy.Aldermere.mass_msun=-2", "--out", out.toString(), "--frames", "1");
+        assertOneLineNaming(r, "hollin-group.toml", "mass_msun");
+        assertFalse(Files.exists(out), "nothing written");
     }
 
     @Test

@@ -199,9 +199,11 @@ public final class ViewLoop implements InputSink {
 
     private String title() {
         ViewState v = controls.state();
-        return String.format(Locale.ROOT, "holdfast view: %s | t = %.3f Gyr | %.3g Gyr/s %s, %s",
+        String status = source.status();
+        return String.format(Locale.ROOT, "holdfast view: %s | t = %.3f Gyr | %.3g Gyr/s %s, %s%s",
                 inputName, v.clock().tGyr(), v.clock().rateGyrPerS(),
-                v.clock().forward() ? "forward" : "backward", v.clock().playing() ? "playing" : "paused");
+                v.clock().forward() ? "forward" : "backward", v.clock().playing() ? "playing" : "paused",
+                status.isEmpty() ? "" : " | " + status);
     }
 
     @Override

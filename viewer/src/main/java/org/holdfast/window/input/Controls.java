@@ -27,9 +27,6 @@ public final class Controls {
     public static final double SCRUB_FRACTION = 0.01;
 
     private final FrameSource source;
-    private final double startGyr;
-    private final double endGyr;
-    private final double[] eventsGyr;
     private final int memberCount;
     private final double[] xyz = new double[3];
 
@@ -41,10 +38,6 @@ public final class Controls {
     /** Controls starting from {@code initial} over the span and members of {@code source}. */
     public Controls(FrameSource source, ViewState initial) {
         this.source = source;
-        this.startGyr = source.startGyr();
-        this.endGyr = source.endGyr();
-        this.eventsGyr = source.eventTimesGyr().clone();
-        java.util.Arrays.sort(eventsGyr);
         this.memberCount = source.memberNames().size();
         this.state = initial;
         settle();
@@ -79,7 +72,10 @@ public final class Controls {
     private void applyViewAction(Action action) {
         Clock clock = state.clock();
         Camera cam = state.camera();
-        double span = endGyr - startGyr;
+        double startGyr = source.startGyr();
+        double endGyr = source.endGyr();
+        // a run still growing scrubs in steps of its whole planned length
+        double span = Math.max(endGyr - startGyr, Math.abs(source.runEndGyr() - source.runStartGyr()));
         switch (action) {
             case PLAY_PAUSE -> state = state.with(replayFromEnd(clock).withPlaying(!clock.playing()));
             case FASTER -> state = state.with(clock.scaleRate(2.0));
@@ -154,15 +150,27 @@ public final class Controls {
         state = state.with(state.camera().zoom(Math.pow(ZOOM_STEP, -notches)));
     }
 
-    /** Wall time passed: the clock runs and a followed member is kept in the centre. */
+    /**
+     * Wall time passed: the clock runs and a followed member is kept in the centre. While the
+     * source is still growing, the clock waits at the end the run is growing towards, playing,
+     * for the run to go on.
+     */
     public void tick(double dtSeconds) {
-        state = state.with(state.clock().advance(dtSeconds, startGyr, endGyr));
+        Clock before = state.clock();
+        Clock after = before.advance(dtSeconds, source.startGyr(), source.endGyr());
+        boolean towardRunEnd = before.forward() == (source.runEndGyr() >= source.runStartGyr());
+        if (before.playing() && !after.playing() && towardRunEnd && source.growing()) {
+            after = after.withPlaying(true);
+        }
+        state = state.with(after);
         settle();
     }
 
     /** Playing again from the end the clock stopped at starts over from the other end. */
     private Clock replayFromEnd(Clock clock) {
-        if (clock.playing()) {
+        double startGyr = source.startGyr();
+        double endGyr = source.endGyr();
+        if (clock.playing() || source.growing()) {
             return clock;
         }
         if (clock.forward() && clock.tGyr() >= endGyr) {
@@ -175,10 +183,14 @@ public final class Controls {
     }
 
     private void moveClock(double tGyr) {
-        state = state.with(state.clock().at(tGyr, startGyr, endGyr));
+        state = state.with(state.clock().at(tGyr, source.startGyr(), source.endGyr()));
     }
 
     private void jumpToEvent(boolean later) {
+        double startGyr = source.startGyr();
+        double endGyr = source.endGyr();
+        double[] eventsGyr = source.eventTimesGyr();
+        java.util.Arrays.sort(eventsGyr);
         double t = state.clock().tGyr();
         double eps = 1e-9 * Math.max(1.0, Math.abs(endGyr - startGyr));
         if (later) {

@@ -53,7 +53,7 @@ class WindowTest {
     void screenshotEqualsTheFrameTheSourceDraws() throws Exception {
         PatternSource source = new PatternSource();
         Path shot = dir.resolve("trio.png");
-        ViewRun.Result r = ViewRun.run(input -> source, "view", dir.toString(), "--frames", "3",
+        ViewRun.Result r = ViewRun.run((input, sets, keep) -> source, "view", dir.toString(), "--frames", "3",
                 "--screenshot", shot.toString(), "--camera", "30,10,500", "--at-gyr", "2.5", "--size", "320x200");
         assertEquals(0, r.exitCode(), r.err());
         assertEquals(3, source.drawCount());
@@ -76,7 +76,7 @@ class WindowTest {
     void domePreviewAndFpsReport() throws Exception {
         PatternSource source = new PatternSource();
         Path shot = dir.resolve("dome.png");
-        ViewRun.Result r = ViewRun.run(input -> source, "view", dir.toString(), "--frames", "5", "--dome",
+        ViewRun.Result r = ViewRun.run((input, sets, keep) -> source, "view", dir.toString(), "--frames", "5", "--dome",
                 "--fps-report", "--screenshot", shot.toString(), "--size", "256x256");
         assertEquals(0, r.exitCode(), r.err());
         assertEquals(Projection.DOME, source.lastView().camera().projection());
@@ -97,7 +97,7 @@ class WindowTest {
             }
         };
         Path shot = dir.resolve("resized.png");
-        ViewRun.Result r = ViewRun.run(input -> source, "view", dir.toString(), "--frames", "6",
+        ViewRun.Result r = ViewRun.run((input, sets, keep) -> source, "view", dir.toString(), "--frames", "6",
                 "--screenshot", shot.toString(), "--size", "320x240");
         assertEquals(0, r.exitCode(), r.err());
         assertEquals(TOLERANCE, FrameCompare.maxChannelDifference(shot,
@@ -116,7 +116,7 @@ class WindowTest {
             }
         };
         Path shot = dir.resolve("closed.png");
-        ViewRun.Result r = ViewRun.run(input -> source, "view", dir.toString(), "--frames", "50",
+        ViewRun.Result r = ViewRun.run((input, sets, keep) -> source, "view", dir.toString(), "--frames", "50",
                 "--screenshot", shot.toString(), "--size", "160x120");
         assertEquals(0, r.exitCode(), r.err());
         assertEquals(2, source.drawCount());
@@ -132,7 +132,7 @@ class WindowTest {
     void fixedClockStepMakesPlayingRepeatable() throws Exception {
         PatternSource source = new PatternSource();
         Path shot = dir.resolve("played.png");
-        ViewRun.Result r = ViewRun.run(input -> source, "view", dir.toString(), "--frames", "4", "--play",
+        ViewRun.Result r = ViewRun.run((input, sets, keep) -> source, "view", dir.toString(), "--frames", "4", "--play",
                 "--at-gyr", "1", "--frame-gyr", "0.5", "--screenshot", shot.toString(), "--size", "96x64");
         assertEquals(0, r.exitCode(), r.err());
         // Frame 1 shows the start; each later frame is one step on.

@@ -164,4 +164,61 @@ class ControlsTest {
         assertEquals(Request.NONE, controls.keyPressed(GLFW_KEY_F12, 0));
         assertEquals(before, controls.state(), "an unbound key changes nothing");
     }
+
+    /** A pattern whose span grows while a run is said to be still going. */
+    private static final class GrowingSource extends PatternSource {
+        double end = 2.0;
+        boolean growing = true;
+
+        @Override
+        public double endGyr() {
+            return end;
+        }
+
+        @Override
+        public boolean growing() {
+            return growing;
+        }
+
+        @Override
+        public double runEndGyr() {
+            return END_GYR;
+        }
+    }
+
+    @Test
+    void theClockWaitsAtTheEndOfARunStillGrowing() {
+        GrowingSource g = new GrowingSource();
+        Controls c = new Controls(g, ViewState.of(Camera.looking(30, 10, 500), new Clock(1.0, 1.0, true, true)));
+        c.tick(3.0);
+        assertEquals(2.0, c.state().clock().tGyr(), 0, "held at the end reached so far");
+        assertTrue(c.state().clock().playing(), "still playing, waiting for the run");
+        g.end = 5.0;
+        c.tick(1.5);
+        assertEquals(3.5, c.state().clock().tGyr(), 1e-12, "goes on once the run has gone on");
+        g.growing = false;
+        c.tick(5.0);
+        assertEquals(5.0, c.state().clock().tGyr(), 0);
+        assertFalse(c.state().clock().playing(), "a finished run stops the clock at its end");
+    }
+
+    @Test
+    void playingBackwardsIntoTheStartOfAGrowingRunStillStops() {
+        GrowingSource g = new GrowingSource();
+        Controls c = new Controls(g, ViewState.of(Camera.looking(30, 10, 500), new Clock(1.0, 1.0, false, true)));
+        c.tick(3.0);
+        assertEquals(PatternSource.START_GYR, c.state().clock().tGyr(), 0);
+        assertFalse(c.state().clock().playing(), "only the growing end holds the clock");
+    }
+
+    @Test
+    void scrubStepsOfAGrowingRunAreFractionsOfItsPlannedLength() {
+        GrowingSource g = new GrowingSource();
+        Controls c = new Controls(g, ViewState.of(Camera.looking(30, 10, 500), Clock.pausedAt(1.0, 0.5)));
+        c.keyPressed(GLFW_KEY_RIGHT, 0);
+        assertEquals(1.0 + Controls.SCRUB_FRACTION * (PatternSource.END_GYR - PatternSource.START_GYR),
+                c.state().clock().tGyr(), 1e-12);
+        c.keyPressed(GLFW_KEY_END, 0);
+        assertEquals(2.0, c.state().clock().tGyr(), 0, "the end is where the run has got to");
+    }
 }

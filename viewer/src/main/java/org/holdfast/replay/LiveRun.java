@@ -1,0 +1,243 @@
+package org.holdfast.replay;
+
+import java.io.IOException;
+import java.io.UncheckedIOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+
+import org.holdfast.cli.Version;
+import org.holdfast.fates.FateRun;
+import org.holdfast.fates.FateTracker;
+import org.holdfast.output.RunFolder;
+import org.holdfast.output.RunWriter;
+import org.holdfast.render.FateEvent;
+import org.holdfast.run.RunEvent;
+import org.holdfast.run.RunObserver;
+import org.holdfast.run.RunView;
+import org.holdfast.run.Simulation;
+import org.holdfast.scenario.Overrides;
+import org.holdfast.scenario.Scenario;
+import org.holdfast.scenario.ScenarioException;
+import org.holdfast.scenario.ScenarioReader;
+import org.holdfast.uncertain.UncertainNumbers;
+
+/**
+ * A scenario evolving on a background thread while it is shown. The run writes an ordinary run
+ * folder, exactly as {@code holdfast evolve} would (a temporary one, removed on {@link #close()},
+ * unless the caller names a folder to keep); a {@link RunArchive} opened on it and refreshed
+ * between frames sees each snapshot once it is complete, so everything already evolved can be
+ * replayed both ways while the run goes on.
+ *
+ * <p>With each snapshot the run publishes the fate events as its fate tracker sees them then:
+ * mergers as they happen, escapes and rips as they stand (a member that rejoins its group
+ * loses its escape again); the summary at the end has the final word. Closing a live run that is still going cancels it at its next step; a kept folder then
+ * holds a complete run up to that time, with "cancelled" as its stop reason.
+ */
+public final class LiveRun implements AutoCloseable {
+
+    private final Path dir;
+    private final boolean temporary;
+    private final double startGyr;
+    private final double untilGyr;
+    private final Simulation simulation;
+    private final FateTracker fates;
+    private final Thread thread;
+    private final Object progress = new Object();
+    private volatile int snapshots;
+    private volatile double reachedGyr;
+    private volatile List<FateEvent> eventsSoFar = List.of();
+    private volatile boolean finished;
+    private volatile String stopMessage;
+    private volatile String failure;
+
+    private LiveRun(Scenario scenario, Path dir, boolean temporary, Simulation simulation) {
+        this.dir = dir;
+        this.temporary = temporary;
+        this.startGyr = scenario.run().startGyr();
+        this.untilGyr = scenario.run().untilGyr();
+        this.reachedGyr = startGyr;
+        this.simulation = simulation;
+        this.fates = FateRun.tracker(scenario);
+        RunWriter writer = new RunWriter(scenario, dir, Version.number());
+        this.thread = new Thread(() -> evolve(writer), "holdfast-live-run");
+        thread.setDaemon(true);
+    }
+
+    /**
+     * Reads and checks the scenario, then starts evolving it and returns once the first
+     * snapshot is written.
+     *
+     * @param sets {@code --set KEY=VALUE} overrides
+     * @param keep run folder to write and keep (checked as {@code evolve --out} checks it), or
+     *        null for a temporary one
+     * @throws ScenarioException for bad input (file, line and key named), before anything runs
+     */
+    public static LiveRun start(Path scenarioFile, List<String> sets, Path keep) {
+        Scenario s = ScenarioReader.read(scenarioFile, Overrides.parse(sets), UncertainNumbers.central(), Double.NaN);
+        Path dir = keep != null ? RunFolder.choose(keep, scenarioFile) : temporaryFolder();
+        Simulation sim = FateRun.build(s, 0);
+        LiveRun live;
+        try {
+            live = new LiveRun(s, dir, keep == null, sim);
+        } catch (RuntimeException e) {
+            sim.close();
+            if (keep == null) {
+                TemporaryRun.delete(dir.getParent());
+            }
+            throw e;
+        }
+        live.thread.start();
+        live.awaitSnapshots(1);
+        if (live.failure != null && live.snapshots == 0) {
+            String why = live.failure;
+            live.close();
+            throw new ScenarioException(scenarioFile.toString(), null, why);
+        }
+        return live;
+    }
+
+    private static Path temporaryFolder() {
+        try {
+            return Files.createTempDirectory("holdfast-live-").resolve("run");
+        } catch (IOException e) {
+            throw new UncheckedIOException("cannot make a temporary run folder", e);
+        }
+    }
+
+    private void evolve(RunWriter writer) {
+        try {
+            FateRun.Outcome r = writer.run(simulation, fates, List.of(new Feed()));
+            stopMessage = r.result().reason().message();
+        } catch (RuntimeException e) {
+            failure = e.getMessage() == null ? e.toString() : e.getMessage();
+        } finally {
+            simulation.close();
+            finished = true;
+            synchronized (progress) {
+                progress.notifyAll();
+            }
+        }
+    }
+
+    /** Publishes each snapshot once the folder's writers have written it. */
+    private final class Feed implements RunObserver {
+        @Override
+        public void atSnapshot(RunView run) {
+            List<FateEvent> found = new ArrayList<>();
+            for (RunEvent e : fates.events(run)) {
+                FateEvent f = RunArchive.event(e.kind(), e.tGyr(), e.members());
+                if (f != null) {
+                    found.add(f);
+                }
+            }
+            eventsSoFar = List.copyOf(found);
+            reachedGyr = run.tGyr();
+            synchronized (progress) {
+                snapshots++;
+                progress.notifyAll();
+            }
+        }
+    }
+
+    /** The run folder being written. */
+    public Path dir() {
+        return dir;
+    }
+
+    /** Whether the folder is removed on close. */
+    public boolean temporary() {
+        return temporary;
+    }
+
+    /** Where the run starts, Gyr. */
+    public double startGyr() {
+        return startGyr;
+    }
+
+    /** Where the run is heading, Gyr (it may stop sooner: before a rip, on a bad number). */
+    public double untilGyr() {
+        return untilGyr;
+    }
+
+    /** Snapshots written so far. */
+    public int snapshotsWritten() {
+        return snapshots;
+    }
+
+    /** Time of the latest snapshot written, Gyr. */
+    public double reachedGyr() {
+        return reachedGyr;
+    }
+
+    /** Fate events as they stood at the latest snapshot, oldest first. */
+    public List<FateEvent> eventsSoFar() {
+        return eventsSoFar;
+    }
+
+    /** Whether the run has ended (summary written) or failed. */
+    public boolean finished() {
+        return finished;
+    }
+
+    /** Why the run failed, or null. */
+    public String failure() {
+        return failure;
+    }
+
+    /** One line on where the run stands. */
+    public String status() {
+        if (failure != null) {
+            return "the run failed: " + failure;
+        }
+        if (finished) {
+            return String.format(Locale.ROOT, "evolved to %.4g Gyr: %s", reachedGyr, stopMessage);
+        }
+        return String.format(Locale.ROOT, "evolving: %.4g of %.4g Gyr", reachedGyr, untilGyr);
+    }
+
+    /** Waits until at least {@code count} snapshots are written or the run has ended. */
+    public void awaitSnapshots(int count) {
+        synchronized (progress) {
+            while (snapshots < count && !finished) {
+                try {
+                    progress.wait(200);
+                } catch (InterruptedException e) {
+                    Thread.currentThread().interrupt();
+                    return;
+                }
+            }
+        }
+    }
+
+    /** Waits until the run has passed {@code tGyr} (in its own direction) or has ended. */
+    public void awaitGyr(double tGyr) {
+        double dir = Math.signum(untilGyr - startGyr);
+        synchronized (progress) {
+            while ((tGyr - reachedGyr) * dir > 0 && !finished) {
+                try {
+                    progress.wait(200);
+                } catch (InterruptedException e) {
+                    Thread.currentThread().interrupt();
+                    return;
+                }
+            }
+        }
+    }
+
+    /** Cancels a run still going, waits for it to write its last files, removes a temporary folder. */
+    @Override
+    public void close() {
+        simulation.cancel();
+        try {
+            thread.join();
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+        }
+        if (temporary) {
+            TemporaryRun.delete(dir.getParent());
+        }
+    }
+}

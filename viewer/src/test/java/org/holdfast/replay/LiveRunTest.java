@@ -1,0 +1,125 @@
+package org.holdfast.replay;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+
+import org.holdfast.output.RunFolder;
+import org.holdfast.scenario.ScenarioException;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.Timeout;
+import org.junit.jupiter.api.io.TempDir;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+
+/**
+ * A scenario evolving while it is shown: the source's span grows snapshot by snapshot, ends as
+ * the same run folder {@code holdfast evolve} writes, and closing it stops the run cleanly.
+ */
+@Timeout(300)
+class LiveRunTest {
+
+    @TempDir
+    Path dir;
+
+    @Test
+    void theSpanGrowsWithTheRunAndEndsAsTheFinishedFolderReadsBack() throws Exception {
+        Path keep = dir.resolve("live");
+        List<Double> ends = new ArrayList<>();
+        try (RunFrameSource s = RunFrameSource.following(LiveRun.start(DemoRun.SCENARIO, DemoRun.cutDown(125), keep))) {
+            assertEquals(0.0, s.startGyr(), 0, "the run starts today");
+            assertEquals(DemoRun.UNTIL_GYR, s.runEndGyr(), 0, "and heads for run.until_gyr");
+            while (s.growing()) {
+                ends.add(s.endGyr());
+                Thread.sleep(5);
+            }
+            ends.add(s.endGyr());
+            assertEquals(DemoRun.UNTIL_GYR, s.endGyr(), 1e-12, "the whole run in the end");
+            assertFalse(s.growing());
+            for (int i = 1; i < ends.size(); i++) {
+                assertTrue(ends.get(i) >= ends.get(i - 1), "the span only grows: " + ends);
+            }
+            assertTrue(ends.get(0) < DemoRun.UNTIL_GYR, "the window saw the run before it ended: " + ends);
+
+            RunArchive fresh = RunArchive.open(keep);
+            double[] events = s.eventTimesGyr();
+            assertEquals(fresh.events().size(), events.length, "the summary's events, escapes included");
+            for (int i = 0; i < events.length; i++) {
+                assertEquals(fresh.events().get(i).tGyr(), events[i], 0);
+            }
+            assertEquals(fresh.snapshotCount(), 1 + (int) Math.round(DemoRun.UNTIL_GYR / 0.125));
+            assertEquals(DemoRun.UNTIL_GYR, fresh.lastGyr(), 1e-12);
+        }
+        assertTrue(Files.isRegularFile(keep.resolve(RunFolder.SUMMARY)), "a kept folder stays");
+        assertTrue(Files.isRegularFile(keep.resolve("tracks.csv")));
+    }
+
+    @Test
+    void framesOfARunStillGrowingMatchTheFinishedRun() throws Exception {
+        Path keep = dir.resolve("live");
+        double t = 0.6;
+        double[] live = new double[3];
+        try (RunFrameSource s = RunFrameSource.following(LiveRun.start(DemoRun.SCENARIO, DemoRun.cutDown(125), keep))) {
+            s.awaitGyr(t);
+            assertTrue(s.endGyr() >= t);
+            assertTrue(s.memberCentreKpc(0, t, live));
+            while (s.growing()) {
+                Thread.sleep(5);
+            }
+        }
+        double[] done = new double[3];
+        try (RunFrameSource s = new RunFrameSource(RunArchive.open(keep), null)) {
+            assertTrue(s.memberCentreKpc(0, t, done));
+        }
+        for (int c = 0; c < 3; c++) {
+            assertEquals(done[c], live[c], 0, "same snapshots, same interpolation, axis " + c);
+        }
+    }
+
+    @Test
+    void closingMidRunCancelsItAndLeavesAWholeFolder() throws Exception {
+        Path keep = dir.resolve("stopped");
+        LiveRun live = LiveRun.start(DemoRun.SCENARIO, List.of("run.snapshot_every_myr=100"), keep);
+        live.awaitSnapshots(3);
+        live.close();
+        assertTrue(live.finished());
+        assertTrue(live.status().contains("cancelled"), live.status());
+        JsonNode summary = new ObjectMapper().readTree(keep.resolve(RunFolder.SUMMARY).toFile());
+        assertEquals("cancelled", summary.path("stop_reason").asText());
+        assertTrue(summary.path("end_gyr").asDouble() < 40, "stopped long before run.until_gyr");
+        RunArchive back = RunArchive.open(keep);
+        assertTrue(back.snapshotCount() >= 3, "every snapshot written is whole and readable");
+        for (int i = 0; i < back.snapshotCount(); i++) {
+            assertEquals(0.1 * i, back.snapshot(i).tGyr(), 1e-9);
+        }
+    }
+
+    @Test
+    void aTemporaryRunFolderGoesWhenTheSourceCloses() {
+        LiveRun live = LiveRun.start(DemoRun.SCENARIO, DemoRun.cutDown(250), null);
+        Path folder = live.dir();
+        assertTrue(live.temporary());
+        try (RunFrameSource s = RunFrameSource.following(live)) {
+            assertTrue(Files.isDirectory(folder));
+            assertTrue(s.endGyr() >= s.startGyr());
+        }
+        assertFalse(Files.exists(folder), "removed: " + folder);
+        assertFalse(Files.exists(folder.getParent()));
+    }
+
+    @Test
+    void badInputIsRefusedBeforeAnythingRuns() {
+        Path keep = dir.resolve("never");
+        ScenarioException e = assertThrows(ScenarioException.class,
+                () -> LiveRun.start(DemoRun.SCENARIO, List.of("galaxy.Aldermere.mass_msun=-1"), keep));
+        assertTrue(e.getMessage().contains("mass_msun"), e.getMessage());
+        assertFalse(Files.exists(keep), "nothing written");
+    }
+}
