@@ -93,9 +93,10 @@ class FrameRendererTest {
     void bandByBandFrameEqualsTheWholeFrameDrawnInOrder() {
         FlatProjection p = new FlatProjection(150, 100, front().fovDeg());
         CameraPose pose = front();
-        // pixel rows on and beside band edges (bands of 16 rows; the last band is partial)
-        double[] rows = {16.0, 31.999, 32.0, 47.5, 64.01, 99.2};
-        double[] cols = {20.3, 40, 60.7, 80, 100.2, 130};
+        // centres on and beside band edges (bands of 16 rows; the last band is partial), and two
+        // whose footprint (radius 5 rows at sigma 2.5) ends on the last or the first row of a band
+        double[] rows = {16.0, 31.999, 32.0, 47.5, 64.01, 99.2, 20.5, 43.2};
+        double[] cols = {20.3, 40, 60.7, 80, 100.2, 130, 115, 50};
         int n = rows.length;
         double[] gx = new double[n];
         double[] gy = new double[n];
@@ -103,9 +104,9 @@ class FrameRendererTest {
             gx[g] = (cols[g] - 0.5 * p.width()) * REF_KPC / p.focalPx();
             gy[g] = (0.5 * p.height() - rows[g]) * REF_KPC / p.focalPx();
         }
-        String[] names = {"Tessaly", "Brin", "Orrin", "Vell", "Quasso", "Ildra"};
+        String[] names = {"Tessaly", "Brin", "Orrin", "Vell", "Quasso", "Ildra", "Morrow", "Keth"};
         SceneFrame scene = cloud(5000, 21).setClock(6, 1.2)
-                .setGalaxies(n, names, new int[] {0, 1, 2, 3, 4, 5}, gx, gy, new double[n]);
+                .setGalaxies(n, names, new int[] {0, 1, 2, 3, 4, 5, 6, 7}, gx, gy, new double[n]);
         SplittableRandom rng = new SplittableRandom(8);
         for (int g = 0; g < n; g++) {
             int m = 12;
