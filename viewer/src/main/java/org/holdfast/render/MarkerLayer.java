@@ -23,7 +23,6 @@ final class MarkerLayer {
 
     private final SplatKernel centreKernel;
     private final int height;
-    private final int bands;
     /** Segment s: x0, y0, x1, y1 at 4s; light per pixel of length at 3s. */
     private double[] segmentXy = new double[4 * 16];
     private float[] segmentRgb = new float[3 * 16];
@@ -38,9 +37,8 @@ final class MarkerLayer {
     MarkerLayer(SplatKernel centreKernel, int height) {
         this.centreKernel = centreKernel;
         this.height = height;
-        this.bands = (height + SplatLayer.BAND_ROWS - 1) / SplatLayer.BAND_ROWS;
-        this.segmentsOfBand = new BandIndex(bands);
-        this.centresOfBand = new BandIndex(bands);
+        this.segmentsOfBand = new BandIndex(SplatLayer.bands(height));
+        this.centresOfBand = new BandIndex(SplatLayer.bands(height));
     }
 
     /** Forgets the last frame's segments and centres. */
