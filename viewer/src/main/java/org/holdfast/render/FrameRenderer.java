@@ -3,6 +3,7 @@ package org.holdfast.render;
 import java.awt.image.BufferedImage;
 import java.awt.image.DataBufferInt;
 import java.util.concurrent.ForkJoinPool;
+import java.util.function.IntConsumer;
 
 import org.holdfast.render.projection.FlatProjection;
 import org.holdfast.render.projection.Projection;
@@ -11,6 +12,15 @@ import org.holdfast.render.projection.Projection;
  * Renders scene frames into images of one size and projection. Everything a frame needs (the
  * light buffer, splat lists, the image) is allocated once and reused, so keep one renderer per
  * film and call {@link #render} per frame; the returned image is overwritten by the next call.
+ *
+ * <p>A frame is drawn in one parallel pass over bands of {@value SplatLayer#BAND_ROWS} rows, after
+ * two preparations: the tracers are projected into per-band splat lists (on all threads), and
+ * the trail segments and galaxy centres into a {@link MarkerLayer} (on the caller's thread). Each
+ * band task then clears its rows, draws its splats in tracer order, its trail segments and
+ * its galaxy centres, each clipped to its rows, and (in {@link #render}) stretches its rows to
+ * pixels while they are still in cache. Every pixel gets the same float additions in the same
+ * order as splats, then trails, then centres drawn one after the other over the whole frame, so
+ * a frame is bit for bit the same on any thread count.
  *
  * <p>A flat projection follows the field of view of each camera pose; dome and panorama frames
  * show their fixed spans. Not thread-safe: one frame at a time (each frame uses all threads).
@@ -26,7 +36,12 @@ public final class FrameRenderer implements AutoCloseable {
     private final RenderSettings settings;
     private final LightBuffer light;
     private final SplatLayer splats;
-    private final SplatKernel galaxyKernel;
+    private final MarkerLayer markers;
+    private final int bands;
+    /** The task run for each band, made once so that a frame allocates no lambda. */
+    private final IntConsumer bandTask = this::drawBand;
+    /** The stretch the band tasks of this frame apply, or null for light only. */
+    private Stretch bandStretch;
     private final OverlayPainter overlays;
     private final ForkJoinPool pool;
     private final BufferedImage image;
@@ -45,7 +60,8 @@ public final class FrameRenderer implements AutoCloseable {
         this.settings = settings;
         this.light = new LightBuffer(width, height);
         this.splats = new SplatLayer(new SplatKernel(settings.splatSigmaPx()), width, height);
-        this.galaxyKernel = new SplatKernel(settings.galaxySigmaPx());
+        this.markers = new MarkerLayer(new SplatKernel(settings.galaxySigmaPx()), height);
+        this.bands = SplatLayer.bands(height);
         this.overlays = new OverlayPainter(settings.overlays(), "dome".equals(projection.name()), height);
         this.pool = new ForkJoinPool(settings.threads());
         this.image = new BufferedImage(width, height, BufferedImage.TYPE_INT_RGB);
@@ -74,19 +90,24 @@ public final class FrameRenderer implements AutoCloseable {
 
     /** Renders one frame: light, stretch, overlays. The image is reused by the next call. */
     public BufferedImage render(SceneFrame scene, CameraPose pose) {
-        renderLight(scene, pose);
-        Stretch stretch = settings.stretch();
-        int bands = (height + SplatLayer.BAND_ROWS - 1) / SplatLayer.BAND_ROWS;
-        SplatLayer.run(pool, bands, b -> stretch.toPixels(light, pixels, b * SplatLayer.BAND_ROWS,
-                Math.min(height, (b + 1) * SplatLayer.BAND_ROWS)));
+        draw(scene, pose, settings.stretch());
         if (overlays.any()) {
             overlays.paint(image, scene, galaxyPx, kpcPerPixel(scene, pose));
         }
         return image;
     }
 
-    /** Draws the linear light of a frame (tracers, trails, galaxy centres) into {@link #light()}. */
+    /**
+     * Draws the linear light of a frame (tracers, trails, galaxy centres) into {@link #light()},
+     * without the stretch; the light is the same as {@link #render} leaves there.
+     */
     public LightBuffer renderLight(SceneFrame scene, CameraPose pose) {
+        draw(scene, pose, null);
+        return light;
+    }
+
+    /** Projects everything the frame shows, then runs the band tasks with {@code stretch} (or none). */
+    private void draw(SceneFrame scene, CameraPose pose, Stretch stretch) {
         projection = projectionFor(pose);
         pose.worldToCamera(view);
         double ex = pose.eyeKpc().x();
@@ -94,12 +115,30 @@ public final class FrameRenderer implements AutoCloseable {
         double ez = pose.eyeKpc().z();
         double ref2 = settings.referenceDistanceKpc() * settings.referenceDistanceKpc();
         double minD2 = 1e-4 * ref2;
-        // the splat pass clears each band before it draws into it
-        splats.draw(scene, view, ex, ey, ez, projection, settings.starBrightness() * ref2,
-                settings.flowBrightness() * ref2, minD2, colours, light, pool);
-        drawTrails(scene, ex, ey, ez);
-        drawGalaxies(scene, ex, ey, ez, ref2, minD2);
-        return light;
+        markers.clear();
+        projectTrails(scene, ex, ey, ez);
+        projectGalaxies(scene, ex, ey, ez, ref2, minD2);
+        splats.project(scene, view, ex, ey, ez, projection, settings.starBrightness() * ref2,
+                settings.flowBrightness() * ref2, minD2, colours, pool);
+        bandStretch = stretch;
+        SplatLayer.run(pool, bands, bandTask);
+    }
+
+    /**
+     * One band, on whichever thread takes it: clear its rows, draw splats, trail segments and
+     * galaxy centres into them (in that order, as the float sums require), then stretch them to
+     * pixels unless this frame has no {@link #bandStretch}.
+     */
+    private void drawBand(int band) {
+        Stretch stretch = bandStretch;
+        int rowFrom = band * SplatLayer.BAND_ROWS;
+        int rowTo = Math.min(height, rowFrom + SplatLayer.BAND_ROWS);
+        light.clearRows(rowFrom, rowTo);
+        splats.drawBand(band, light);
+        markers.drawBand(band, light);
+        if (stretch != null) {
+            stretch.toPixels(light, pixels, rowFrom, rowTo);
+        }
     }
 
     private Projection projectionFor(CameraPose pose) {
@@ -123,7 +162,8 @@ public final class FrameRenderer implements AutoCloseable {
         return projection.project(cx, cy, cz, out);
     }
 
-    private void drawTrails(SceneFrame scene, double ex, double ey, double ez) {
+    /** Lists the visible trail segments, galaxy by galaxy and oldest first, in {@link #markers}. */
+    private void projectTrails(SceneFrame scene, double ex, double ey, double ez) {
         double now = scene.tGyr();
         double span = settings.trailSpanGyr();
         float base = (float) settings.trailBrightness();
@@ -142,7 +182,7 @@ public final class FrameRenderer implements AutoCloseable {
                     double fade = age < 0 ? 0 : Math.max(0, 1 - age / span);
                     if (fade > 0) {
                         float f = (float) fade * base;
-                        TrailPainter.line(light, px, py, qx, qy, f * Palette.red(c), f * Palette.green(c),
+                        markers.addSegment(px, py, qx, qy, f * Palette.red(c), f * Palette.green(c),
                                 f * Palette.blue(c));
                     }
                 }
@@ -152,7 +192,8 @@ public final class FrameRenderer implements AutoCloseable {
         }
     }
 
-    private void drawGalaxies(SceneFrame scene, double ex, double ey, double ez, double ref2, double minD2) {
+    /** Lists the visible galaxy centres in {@link #markers} and keeps their pixels for the overlays. */
+    private void projectGalaxies(SceneFrame scene, double ex, double ey, double ez, double ref2, double minD2) {
         int n = scene.galaxyCount();
         if (galaxyPx.length < 2 * n) {
             galaxyPx = new double[2 * n];
@@ -172,7 +213,7 @@ public final class FrameRenderer implements AutoCloseable {
             double d2 = (x - ex) * (x - ex) + (y - ey) * (y - ey) + (z - ez) * (z - ez);
             float flux = (float) (scale / Math.max(d2, minD2));
             int c = scene.colourIndex(g);
-            galaxyKernel.draw(light, out[0], out[1], flux * Palette.red(c), flux * Palette.green(c),
+            markers.addCentre(out[0], out[1], flux * Palette.red(c), flux * Palette.green(c),
                     flux * Palette.blue(c));
         }
     }

@@ -56,6 +56,14 @@ public final class SplatKernel {
     }
 
     /**
+     * First row of the footprint of a splat at {@code fy}; the footprint spans
+     * {@code 2 * radius() + 1} rows from there. Same integer arithmetic as {@link #draw}.
+     */
+    int topRow(double fy) {
+        return (int) Math.floor(fy) - radius;
+    }
+
+    /**
      * Adds one splat, touching only rows in [rowFrom, rowTo) (a band owned by the caller) and
      * columns inside the frame.
      *

@@ -18,6 +18,9 @@ import org.holdfast.render.projection.Projection;
  * <li>per band: the lists of that band are drawn chunk by chunk, in chunk order, touching only
  *     the band's rows.</li>
  * </ol>
+ * The caller runs stage 2 inside its own task per band ({@link FrameRenderer} clears the band
+ * first and draws trails, centres and the stretch after it), so a band is finished while its rows
+ * are still in cache.
  * Every pixel thus receives its splats in tracer order on any thread count, and the float sums
  * come out bit for bit the same. The lists grow when a frame needs more room and are kept for
  * the next frame, so a film allocates only while its busiest bands are still growing.
@@ -46,7 +49,7 @@ final class SplatLayer {
         this.kernel = kernel;
         this.width = width;
         this.height = height;
-        this.bands = (height + BAND_ROWS - 1) / BAND_ROWS;
+        this.bands = bands(height);
         this.lists = new float[CHUNKS * bands][];
         this.used = new int[CHUNKS * bands];
         for (int i = 0; i < lists.length; i++) {
@@ -55,20 +58,24 @@ final class SplatLayer {
     }
 
     /**
-     * Draws the scene's tracers into {@code light}.
+     * Stage 1: projects the scene's tracers into this layer's band lists, on all threads. Then
+     * {@link #drawBand} draws them, one band at a time, into rows its caller has cleared.
      *
      * @param view world-to-camera rotation, row-major
      * @param minD2 squared distance below which a splat brightens no further (kpc^2)
      * @param colours per colour index: red, green, blue of a star (3 floats each), then the flow
      *        tracer colour in the last three slots
      */
-    void draw(SceneFrame scene, double[] view, double ex, double ey, double ez, Projection projection,
-            double starScale, double flowScale, double minD2, float[] colours, LightBuffer light,
-            ForkJoinPool pool) {
+    void project(SceneFrame scene, double[] view, double ex, double ey, double ez, Projection projection,
+            double starScale, double flowScale, double minD2, float[] colours, ForkJoinPool pool) {
         int n = scene.tracerCount();
         run(pool, CHUNKS, c -> project(c, n, scene, view, ex, ey, ez, projection, starScale, flowScale, minD2,
                 colours));
-        run(pool, bands, b -> drawBand(b, light));
+    }
+
+    /** Number of bands of {@link #BAND_ROWS} rows in a frame {@code height} rows tall. */
+    static int bands(int height) {
+        return (height + BAND_ROWS - 1) / BAND_ROWS;
     }
 
     /** Runs tasks 0..tasks-1 on the pool, or inline on the caller's thread when it has one thread. */
@@ -140,11 +147,10 @@ final class SplatLayer {
         used[list] = k + STRIDE;
     }
 
-    /** Clears the band's rows (so the frame is cleared on all threads too), then draws its splats. */
-    private void drawBand(int band, LightBuffer light) {
+    /** Stage 2 for one band: draws its splats, chunk by chunk, touching only the band's rows. */
+    void drawBand(int band, LightBuffer light) {
         int rowFrom = band * BAND_ROWS;
         int rowTo = Math.min(height, rowFrom + BAND_ROWS);
-        light.clearRows(rowFrom, rowTo);
         for (int c = 0; c < CHUNKS; c++) {
             int list = c * bands + band;
             float[] p = lists[list];

@@ -19,6 +19,17 @@ public final class TrailPainter {
      */
     public static void line(LightBuffer buf, double x0, double y0, double x1, double y1, float r, float g,
             float b) {
+        line(buf, x0, y0, x1, y1, r, g, b, 0, buf.height());
+    }
+
+    /**
+     * As {@link #line(LightBuffer, double, double, double, double, float, float, float)}, but
+     * touching only rows in [rowFrom, rowTo) (a band owned by the caller). Each pixel gets the
+     * very value the whole line would give it, so drawing a line band by band over all bands
+     * equals drawing it once.
+     */
+    public static void line(LightBuffer buf, double x0, double y0, double x1, double y1, float r, float g,
+            float b, int rowFrom, int rowTo) {
         boolean steep = Math.abs(y1 - y0) > Math.abs(x1 - x0);
         if (steep) {
             double t = x0;
@@ -48,16 +59,43 @@ public final class TrailPainter {
         int major = steep ? buf.height() : buf.width();
         int from = Math.max(0, (int) Math.ceil(x0 - 0.5));
         int to = Math.min(major, (int) Math.ceil(x1 - 0.5));
+        if (steep) {
+            // the major axis is the row: clip it to the band
+            from = Math.max(from, rowFrom);
+            to = Math.min(to, rowTo);
+            for (int i = from; i < to; i++) {
+                double y = y0 + gradient * (i + 0.5 - x0) - 0.5;
+                int j = (int) Math.floor(y);
+                float frac = (float) (y - j);
+                float near = 1 - frac;
+                buf.add(j, i, cr * near, cg * near, cb * near);
+                buf.add(j + 1, i, cr * frac, cg * frac, cb * frac);
+            }
+            return;
+        }
+        if (gradient != 0) {
+            // skip columns whose rows j, j + 1 lie well away from the band (one row to spare
+            // either side, far more than the rounding of y); the test per pixel below decides
+            double a = x0 - 0.5 + (rowFrom - 1.5 - y0) / gradient;
+            double c = x0 - 0.5 + (rowTo + 1.5 - y0) / gradient;
+            double lo = Math.floor(Math.min(a, c)) - 1;
+            double hi = Math.ceil(Math.max(a, c)) + 2;
+            if (lo > from) {
+                from = (int) Math.min(to, lo);
+            }
+            if (hi < to) {
+                to = (int) Math.max(from, hi);
+            }
+        }
         for (int i = from; i < to; i++) {
             double y = y0 + gradient * (i + 0.5 - x0) - 0.5;
             int j = (int) Math.floor(y);
             float frac = (float) (y - j);
             float near = 1 - frac;
-            if (steep) {
-                buf.add(j, i, cr * near, cg * near, cb * near);
-                buf.add(j + 1, i, cr * frac, cg * frac, cb * frac);
-            } else {
+            if (j >= rowFrom && j < rowTo) {
                 buf.add(i, j, cr * near, cg * near, cb * near);
+            }
+            if (j + 1 >= rowFrom && j + 1 < rowTo) {
                 buf.add(i, j + 1, cr * frac, cg * frac, cb * frac);
             }
         }

@@ -82,6 +82,140 @@ class FrameRendererTest {
         }
     }
 
+    /**
+     * The fused band pass (each band draws its splats, then its share of every trail segment
+     * and galaxy centre, then stretches its rows) must give what drawing everything over the
+     * whole frame in order gives: the splats, then each segment with {@link TrailPainter#line},
+     * then each centre with {@link SplatKernel#draw}, then one stretch. The trails zigzag across
+     * every band and the centres sit on band edges, so a wrong clip leaves a seam or a gap.
+     */
+    @Test
+    void bandByBandFrameEqualsTheWholeFrameDrawnInOrder() {
+        FlatProjection p = new FlatProjection(150, 100, front().fovDeg());
+        CameraPose pose = front();
+        // centres on and beside band edges (bands of 16 rows; the last band is partial), and two
+        // whose footprint (radius 5 rows at sigma 2.5) ends on the last or the first row of a band
+        double[] rows = {16.0, 31.999, 32.0, 47.5, 64.01, 99.2, 20.5, 43.2};
+        double[] cols = {20.3, 40, 60.7, 80, 100.2, 130, 115, 50};
+        int n = rows.length;
+        double[] gx = new double[n];
+        double[] gy = new double[n];
+        for (int g = 0; g < n; g++) {
+            gx[g] = (cols[g] - 0.5 * p.width()) * REF_KPC / p.focalPx();
+            gy[g] = (0.5 * p.height() - rows[g]) * REF_KPC / p.focalPx();
+        }
+        String[] names = {"Tessaly", "Brin", "Orrin", "Vell", "Quasso", "Ildra", "Morrow", "Keth"};
+        SceneFrame scene = cloud(5000, 21).setClock(6, 1.2)
+                .setGalaxies(n, names, new int[] {0, 1, 2, 3, 4, 5, 6, 7}, gx, gy, new double[n]);
+        SplittableRandom rng = new SplittableRandom(8);
+        for (int g = 0; g < n; g++) {
+            int m = 12;
+            double[] t = new double[m];
+            double[] x = new double[m];
+            double[] y = new double[m];
+            double[] z = new double[m];
+            for (int k = 0; k < m; k++) {
+                t[k] = 6.0 * k / (m - 1);
+                // alternate top and bottom of the frame, some steep, some shallow
+                x[k] = g % 2 == 0 ? (rng.nextDouble() - 0.5) * 90 : (k % 2 == 0 ? -70 : 70);
+                y[k] = g % 2 == 0 ? (k % 2 == 0 ? 45 : -45) : (rng.nextDouble() - 0.5) * 60;
+                // one sample behind the eye breaks the trail there
+                z[k] = k == 5 && g == 1 ? 2 * REF_KPC : rng.nextDouble() * 20 - 10;
+            }
+            x[m - 1] = gx[g];
+            y[m - 1] = gy[g];
+            z[m - 1] = 0;
+            scene.setTrail(g, m, t, x, y, z);
+        }
+        for (Stretch stretch : new Stretch[] {Stretch.asinh(0.4, 9.0), Stretch.linear(4)}) {
+            RenderSettings look = new RenderSettings().noOverlays().threads(1).stretch(stretch)
+                    .trailBrightness(2).trailSpanGyr(5).galaxyBrightness(40).galaxySigmaPx(2.5);
+            int[] splatsOnly;
+            LightBuffer whole = new LightBuffer(p.width(), p.height());
+            try (FrameRenderer r = new FrameRenderer(p, new RenderSettings().noOverlays().threads(1)
+                    .stretch(stretch).trailBrightness(0).galaxyBrightness(0))) {
+                splatsOnly = pixels(r.render(scene, pose));
+                System.arraycopy(r.light().copyRgb(), 0, whole.rgb, 0, whole.rgb.length);
+            }
+            int segments = drawTrailsAndCentresWhole(whole, scene, pose, p, look);
+            assertTrue(segments > 40, "segments drawn: " + segments);
+            int[] want = new int[p.width() * p.height()];
+            stretch.toPixels(whole, want, 0, p.height());
+            int changed = 0;
+            for (int k = 0; k < want.length; k++) {
+                changed += want[k] != splatsOnly[k] ? 1 : 0;
+            }
+            assertTrue(changed > 1000, "trails and centres light " + changed + " pixels");
+            for (int threads : new int[] {1, 2, 3}) {
+                try (FrameRenderer r = new FrameRenderer(p, look.threads(threads))) {
+                    int[] got = pixels(r.render(scene, pose));
+                    assertArrayEquals(whole.copyRgb(), r.light().copyRgb(), "light on " + threads + " threads");
+                    assertArrayEquals(want, got, "pixels on " + threads + " threads");
+                }
+            }
+        }
+    }
+
+    /**
+     * Adds the scene's trails and galaxy centres to {@code buf} over the whole frame, in the
+     * renderer's order and arithmetic; returns the number of trail segments drawn.
+     */
+    private static int drawTrailsAndCentresWhole(LightBuffer buf, SceneFrame scene, CameraPose pose,
+            Projection p, RenderSettings look) {
+        double[] m = pose.worldToCamera(new double[9]);
+        double ex = pose.eyeKpc().x();
+        double ey = pose.eyeKpc().y();
+        double ez = pose.eyeKpc().z();
+        double[] out = new double[2];
+        int segments = 0;
+        float base = (float) look.trailBrightness();
+        for (int g = 0; g < scene.galaxyCount(); g++) {
+            int c = scene.colourIndex(g);
+            double px = Double.NaN;
+            double py = Double.NaN;
+            for (int k = 0; k < scene.trailCount(g); k++) {
+                boolean seen = project(m, scene.trailX(g, k) - ex, scene.trailY(g, k) - ey,
+                        scene.trailZ(g, k) - ez, p, out);
+                double qx = seen ? out[0] : Double.NaN;
+                double qy = seen ? out[1] : Double.NaN;
+                if (k > 0 && seen && !Double.isNaN(px)) {
+                    double age = scene.tGyr() - 0.5 * (scene.trailTGyr(g, k) + scene.trailTGyr(g, k - 1));
+                    double fade = age < 0 ? 0 : Math.max(0, 1 - age / look.trailSpanGyr());
+                    if (fade > 0) {
+                        float f = (float) fade * base;
+                        TrailPainter.line(buf, px, py, qx, qy, f * Palette.red(c), f * Palette.green(c),
+                                f * Palette.blue(c));
+                        segments++;
+                    }
+                }
+                px = qx;
+                py = qy;
+            }
+        }
+        SplatKernel centre = new SplatKernel(look.galaxySigmaPx());
+        double ref2 = look.referenceDistanceKpc() * look.referenceDistanceKpc();
+        for (int g = 0; g < scene.galaxyCount(); g++) {
+            double wx = scene.galaxyX(g) - ex;
+            double wy = scene.galaxyY(g) - ey;
+            double wz = scene.galaxyZ(g) - ez;
+            if (project(m, wx, wy, wz, p, out)) {
+                double d2 = wx * wx + wy * wy + wz * wz;
+                float flux = (float) (look.galaxyBrightness() * ref2 / Math.max(d2, 1e-4 * ref2));
+                int c = scene.colourIndex(g);
+                centre.draw(buf, out[0], out[1], flux * Palette.red(c), flux * Palette.green(c),
+                        flux * Palette.blue(c));
+            }
+        }
+        return segments;
+    }
+
+    private static boolean project(double[] m, double wx, double wy, double wz, Projection p, double[] out) {
+        double cx = m[0] * wx + m[1] * wy + m[2] * wz;
+        double cy = m[3] * wx + m[4] * wy + m[5] * wz;
+        double cz = m[6] * wx + m[7] * wy + m[8] * wz;
+        return p.project(cx, cy, cz, out);
+    }
+
     @Test
     void additiveBlendingCommutes() {
         SceneFrame a = cloud(3000, 5);
