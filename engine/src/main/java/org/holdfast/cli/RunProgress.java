@@ -16,7 +16,7 @@ import me.tongfei.progressbar.ProgressBarStyle;
  * Shows how far a run has come: a progress bar on a terminal (simulated time, steps, rate, ETA),
  * plain lines every few seconds when the output is a file or a pipe, nothing when quiet.
  */
-final class RunProgress implements RunObserver {
+public final class RunProgress implements RunObserver {
 
     private static final long PLAIN_INTERVAL_NANOS = 5_000_000_000L;
 
@@ -28,7 +28,10 @@ final class RunProgress implements RunObserver {
     private long startNanos;
     private long lastPlain;
 
-    RunProgress(PrintWriter out, boolean terminal, double startGyr, double untilGyr) {
+    /**
+     * @param terminal draw a bar (true) or print plain lines (false); see {@link #onTerminal()}
+     */
+    public RunProgress(PrintWriter out, boolean terminal, double startGyr, double untilGyr) {
         this.out = out;
         this.terminal = terminal;
         this.startGyr = startGyr;
@@ -36,7 +39,7 @@ final class RunProgress implements RunObserver {
     }
 
     /** Whether standard output is an interactive terminal. */
-    static boolean onTerminal() {
+    public static boolean onTerminal() {
         return System.console() != null && System.getenv("CI") == null;
     }
 

@@ -114,7 +114,7 @@ public final class RenderCommand implements Callable<Integer> {
             Path runDir = input;
             if (scenario) {
                 say(o, "evolving " + input + " into a temporary run folder first ...");
-                temp = TemporaryRun.evolve(input, set, null);
+                temp = TemporaryRun.evolve(input, set, quiet ? null : o);
                 runDir = temp.dir();
             }
             RunArchive run = RunArchive.open(runDir);

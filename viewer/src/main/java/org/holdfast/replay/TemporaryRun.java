@@ -2,22 +2,28 @@ package org.holdfast.replay;
 
 import java.io.IOException;
 import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.io.UncheckedIOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
+import java.util.Locale;
 import java.util.stream.Stream;
 
-import org.holdfast.cli.Holdfast;
+import org.holdfast.cli.RunProgress;
+import org.holdfast.cli.Version;
+import org.holdfast.fates.FateRun;
+import org.holdfast.output.RunWriter;
+import org.holdfast.run.RunObserver;
+import org.holdfast.run.Simulation;
+import org.holdfast.scenario.Overrides;
+import org.holdfast.scenario.Scenario;
 import org.holdfast.scenario.ScenarioException;
-
-import picocli.CommandLine;
+import org.holdfast.scenario.ScenarioReader;
+import org.holdfast.uncertain.UncertainNumbers;
 
 /**
- * A scenario evolved into a temporary run folder with {@code holdfast evolve}, so that it can be
+ * A scenario evolved into a temporary run folder, as by {@code holdfast evolve}, so that it can be
  * replayed like any run; the folder is removed on {@link #close()}. Evolving first (rather than
  * stepping as frames are drawn) keeps every frame a pure function of its time: frames can be
  * drawn in any order, skipped on a restart and scrubbed back and forth in the window.
@@ -31,36 +37,37 @@ public final class TemporaryRun implements AutoCloseable {
     }
 
     /**
-     * Evolves {@code scenario} with the given {@code --set} overrides.
+     * Evolves {@code scenario} with the given {@code --set} overrides, as {@code holdfast evolve}
+     * would, into a temporary folder.
      *
-     * @param progress where the evolve's progress goes, or null for none
-     * @throws ScenarioException with the evolve's own one-line message when the scenario is bad
+     * @param progress where the evolve's progress and a closing line go, or null for none
+     * @throws ScenarioException naming the file, line and key when the scenario is bad
      */
     public static TemporaryRun evolve(Path scenario, List<String> sets, PrintWriter progress) {
+        Scenario s = ScenarioReader.read(scenario, Overrides.parse(sets), UncertainNumbers.central(), Double.NaN);
+        Simulation sim = FateRun.build(s, 0);
         Path parent;
         try {
             parent = Files.createTempDirectory("holdfast-run-");
         } catch (IOException e) {
+            sim.close();
             throw new UncheckedIOException("cannot make a temporary run folder", e);
         }
         Path dir = parent.resolve("run");
-        List<String> args = new ArrayList<>(List.of("evolve", scenario.toString(), "--out", dir.toString()));
-        for (String s : sets) {
-            args.add("--set");
-            args.add(s);
-        }
-        if (progress == null) {
-            args.add("--quiet");
-        }
-        CommandLine cl = Holdfast.commandLine();
-        StringWriter err = new StringWriter();
-        cl.setErr(new PrintWriter(err, true));
-        cl.setOut(progress != null ? progress : new PrintWriter(new StringWriter(), true));
-        int code = cl.execute(args.toArray(String[]::new));
-        if (code != 0) {
+        try {
+            List<RunObserver> watchers = progress == null ? List.of()
+                    : List.of(new RunProgress(progress, RunProgress.onTerminal(), s.run().startGyr(), s.run().untilGyr()));
+            FateRun.Outcome r = new RunWriter(s, dir, Version.number()).run(sim, watchers);
+            if (progress != null) {
+                progress.printf(Locale.ROOT, "evolved to %.4g Gyr in %.1f s: %s%n", r.result().endGyr(),
+                        r.result().wallSeconds(), r.result().reason().message());
+                progress.flush();
+            }
+        } catch (RuntimeException e) {
             delete(parent);
-            String line = err.toString().strip().lines().findFirst().orElse("evolve failed");
-            throw new ScenarioException(null, null, line.replaceFirst("^holdfast evolve: ", ""));
+            throw e;
+        } finally {
+            sim.close();
         }
         return new TemporaryRun(dir);
     }
