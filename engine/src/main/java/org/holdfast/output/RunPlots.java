@@ -56,6 +56,9 @@ public final class RunPlots {
         // with distances below 1 kpc (a body at the centre) drawn at 1 kpc.
         boolean log = max > 50 * Math.max(min, 1);
         c.getStyler().setYAxisLogarithmic(log);
+        if (log) {
+            c.setYAxisTitle("distance [kpc] (log; under 1 kpc drawn at 1)");
+        }
         for (Map.Entry<String, double[]> e : rec.distancesKpc().entrySet()) {
             double[] d = log ? atLeast(e.getValue(), 1.0) : e.getValue();
             var series = Charts.line(c, e.getKey(), t, d, colour);
