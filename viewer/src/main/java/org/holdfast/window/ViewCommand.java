@@ -155,11 +155,6 @@ public final class ViewCommand implements Callable<Integer> {
                     + "' is a run folder");
         }
         try (FrameSource source = opener.open(input, sets, outDir)) {
-            if (scenario && source.growing()) {
-                out.println("evolving " + input + " as it plays, into "
-                        + (outDir != null ? outDir : "a temporary run folder (removed on quitting)"));
-                out.flush();
-            }
             ViewState start;
             try {
                 start = startView(source, cam);
@@ -168,6 +163,20 @@ public final class ViewCommand implements Callable<Integer> {
             }
             if (!GlWindow.displayNamed()) {
                 return fail(GlWindow.NO_DISPLAY + "; use holdfast render to make pictures without a window");
+            }
+            if (scenario && source.growing()) {
+                out.println("evolving " + input + " as it plays, into "
+                        + (outDir != null ? outDir : "a temporary run folder (removed on quitting)"));
+                if (atGyr != null) {
+                    out.println("waiting for the run to reach " + plain(atGyr) + " Gyr ...");
+                }
+                out.flush();
+            }
+            if (atGyr != null) {
+                source.awaitGyr(atGyr);
+                if (!(atGyr >= source.startGyr() && atGyr <= source.endGyr())) {
+                    return fail("--at-gyr: " + plain(atGyr) + " was not reached; " + source.status());
+                }
             }
             Controls controls = new Controls(source, start);
             ViewLoop loop = new ViewLoop(source, controls, settings, input.getFileName().toString(), out);
@@ -231,8 +240,8 @@ public final class ViewCommand implements Callable<Integer> {
 
     /**
      * The first view: the camera asked for (or an overview), the clock where asked. A run still
-     * evolving starts at its beginning, running towards its end; --at-gyr there waits until the
-     * run has got that far.
+     * evolving starts at its beginning, running towards its end (the caller waits for a run to
+     * reach --at-gyr).
      */
     private ViewState startView(FrameSource source, CameraSpec cam) throws BadOption {
         boolean growing = source.growing();
@@ -245,10 +254,6 @@ public final class ViewCommand implements Callable<Integer> {
             if (!(atGyr >= lo && atGyr <= hi)) {
                 throw new BadOption("--at-gyr: " + plain(atGyr) + " lies outside this run, which spans "
                         + plain(lo) + " to " + plain(hi) + " Gyr");
-            }
-            source.awaitGyr(atGyr);
-            if (!(atGyr >= source.startGyr() && atGyr <= source.endGyr())) {
-                throw new BadOption("--at-gyr: " + plain(atGyr) + " was not reached; " + source.status());
             }
             t = atGyr;
         }
