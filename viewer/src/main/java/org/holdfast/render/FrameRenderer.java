@@ -178,8 +178,9 @@ public final class FrameRenderer implements AutoCloseable {
                 double qx = seen ? out[0] : Double.NaN;
                 double qy = seen ? out[1] : Double.NaN;
                 if (k > 0 && seen && !Double.isNaN(px) && !(panorama && Math.abs(qx - px) > 0.5 * width)) {
-                    double age = now - 0.5 * (t + scene.trailTGyr(g, k - 1));
-                    double fade = age < 0 ? 0 : Math.max(0, 1 - age / span);
+                    // the samples lie behind the clock in the run's direction: into the past, a backward run's
+                    double age = Math.abs(now - 0.5 * (t + scene.trailTGyr(g, k - 1)));
+                    double fade = Math.max(0, 1 - age / span);
                     if (fade > 0) {
                         float f = (float) fade * base;
                         markers.addSegment(px, py, qx, qy, f * Palette.red(c), f * Palette.green(c),

@@ -179,8 +179,8 @@ class FrameRendererTest {
                 double qx = seen ? out[0] : Double.NaN;
                 double qy = seen ? out[1] : Double.NaN;
                 if (k > 0 && seen && !Double.isNaN(px)) {
-                    double age = scene.tGyr() - 0.5 * (scene.trailTGyr(g, k) + scene.trailTGyr(g, k - 1));
-                    double fade = age < 0 ? 0 : Math.max(0, 1 - age / look.trailSpanGyr());
+                    double age = Math.abs(scene.tGyr() - 0.5 * (scene.trailTGyr(g, k) + scene.trailTGyr(g, k - 1)));
+                    double fade = Math.max(0, 1 - age / look.trailSpanGyr());
                     if (fade > 0) {
                         float f = (float) fade * base;
                         TrailPainter.line(buf, px, py, qx, qy, f * Palette.red(c), f * Palette.green(c),
@@ -394,5 +394,36 @@ class FrameRendererTest {
             m = Math.max(m, a[i]);
         }
         return m;
+    }
+
+    /**
+     * A run into the past leaves its trail behind the clock too: the trail of a backward run, with
+     * every time negated, is lit exactly like the same path run forward (fading with |age|).
+     */
+    @Test
+    void aBackwardRunsTrailFadesLikeTheSamePathRunForward() {
+        FlatProjection p = new FlatProjection(96, 64, 40);
+        double[] x = {-60, -20, 10, 30};
+        double[] y = {-20, 15, -10, 5};
+        double[] z = {0, 0, 0, 0};
+        RenderSettings look = plain(1).trailBrightness(2).trailSpanGyr(5);
+        float[][] lights = new float[2][];
+        for (int sign = 0; sign < 2; sign++) {
+            double k = sign == 0 ? 1 : -1;
+            double[] t = {0, k * 1.0, k * 2.0, k * 3.0};
+            SceneFrame scene = new SceneFrame().setClock(k * 3.0, 1)
+                    .setGalaxies(1, NAMES, new int[] {0}, new double[] {30}, new double[] {5}, new double[] {0})
+                    .setTracers(0, new float[0], new float[0], new float[0], new int[0]);
+            scene.setTrail(0, 4, t, x, y, z);
+            try (FrameRenderer r = new FrameRenderer(p, look)) {
+                lights[sign] = r.renderLight(scene, front()).copyRgb();
+            }
+        }
+        double total = 0;
+        for (float v : lights[0]) {
+            total += v;
+        }
+        assertTrue(total > 0, "the forward trail is drawn");
+        assertArrayEquals(lights[0], lights[1], "the backward trail is drawn the same");
     }
 }
