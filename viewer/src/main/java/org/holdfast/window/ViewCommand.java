@@ -36,7 +36,7 @@ import picocli.CommandLine.Spec;
             "",
             "Examples:",
             "  holdfast view runs/tessera-trio",
-            "  holdfast view scenarios/hollin-group.toml --play --set cosmology.dark_energy.w0=-1.5",
+            "  holdfast view scenarios/hollin-group.toml --play --out hollin-live",
             "  holdfast view runs/tessera-trio --at-gyr 4.5 --camera 30,15,800 \\",
             "      --frames 1 --screenshot trio-4.5.png",
             "  holdfast view --keys"
@@ -47,7 +47,7 @@ public final class ViewCommand implements Callable<Integer> {
     static final int EXIT_BAD_INPUT = 2;
 
     @Parameters(index = "0", arity = "0..1", paramLabel = "RUN_DIR|SCENARIO",
-            description = "A run folder to replay or a scenario (.toml) to evolve first.")
+            description = "A run folder to replay or a scenario (.toml) to evolve as it plays.")
     Path input;
 
     @Option(names = "--set", paramLabel = "KEY=VALUE",
@@ -83,7 +83,8 @@ public final class ViewCommand implements Callable<Integer> {
                     + "of view in degrees, e.g. 30,15,800.")
     String camera;
 
-    @Option(names = "--at-gyr", paramLabel = "T", description = "Start the clock at T Gyr (default: the run's start).")
+    @Option(names = "--at-gyr", paramLabel = "T",
+            description = "Start the clock at T Gyr (default: the run's start); a scenario is shown once its run gets there.")
     Double atGyr;
 
     @Option(names = "--play", description = "Start with the clock running.")
