@@ -33,8 +33,9 @@ import org.holdfast.uncertain.UncertainNumbers;
  *
  * <p>With each snapshot the run publishes the fate events as its fate tracker sees them then:
  * mergers as they happen, escapes and rips as they stand (a member that rejoins its group
- * loses its escape again); the summary at the end has the final word. Closing a live run that is still going cancels it at its next step; a kept folder then
- * holds a complete run up to that time, with "cancelled" as its stop reason.
+ * loses its escape again); the summary at the end has the final word. Closing a live run that
+ * is still going (or quitting the JVM, as with Ctrl+C) cancels it at its next step; a kept folder
+ * then holds a complete run up to that time, with "cancelled" as its stop reason.
  */
 public final class LiveRun implements AutoCloseable {
 
@@ -45,6 +46,8 @@ public final class LiveRun implements AutoCloseable {
     private final Simulation simulation;
     private final FateTracker fates;
     private final Thread thread;
+    /** Stops the run and tidies up if the JVM is told to quit (Ctrl+C) before {@link #close()}. */
+    private final Thread onExit;
     private final Object progress = new Object();
     private volatile int snapshots;
     private volatile double reachedGyr;
@@ -64,6 +67,7 @@ public final class LiveRun implements AutoCloseable {
         RunWriter writer = new RunWriter(scenario, dir, Version.number());
         this.thread = new Thread(() -> evolve(writer), "holdfast-live-run");
         thread.setDaemon(true);
+        this.onExit = new Thread(this::stop, "holdfast-live-run-exit");
     }
 
     /**
@@ -89,6 +93,7 @@ public final class LiveRun implements AutoCloseable {
             }
             throw e;
         }
+        Runtime.getRuntime().addShutdownHook(live.onExit);
         live.thread.start();
         live.awaitSnapshots(1);
         if (live.failure != null && live.snapshots == 0) {
@@ -230,6 +235,15 @@ public final class LiveRun implements AutoCloseable {
     /** Cancels a run still going, waits for it to write its last files, removes a temporary folder. */
     @Override
     public void close() {
+        try {
+            Runtime.getRuntime().removeShutdownHook(onExit);
+        } catch (IllegalStateException e) {
+            // the JVM is already shutting down, and the hook is doing this
+        }
+        stop();
+    }
+
+    private void stop() {
         simulation.cancel();
         try {
             thread.join();

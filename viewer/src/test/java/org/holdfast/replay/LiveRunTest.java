@@ -102,6 +102,35 @@ class LiveRunTest {
     }
 
     @Test
+    void aJvmToldToQuitMidRunStillWritesTheSummary() throws Exception {
+        Path keep = dir.resolve("terminated");
+        List<String> cmd = List.of(Path.of(System.getProperty("java.home"), "bin", "java").toString(), "-cp",
+                System.getProperty("java.class.path"), LiveRunChild.class.getName(), keep.toString());
+        Process p = new ProcessBuilder(cmd).redirectErrorStream(true)
+                .redirectOutput(dir.resolve("child.txt").toFile()).start();
+        Path snaps = keep.resolve("snapshots");
+        long deadline = System.nanoTime() + 120_000_000_000L;
+        while (count(snaps) < 3 && p.isAlive() && System.nanoTime() < deadline) {
+            Thread.sleep(50);
+        }
+        assertTrue(p.isAlive(), "the child runs: " + Files.readString(dir.resolve("child.txt")));
+        p.destroy(); // SIGTERM, as a terminal's Ctrl+C or a scheduler would send
+        assertTrue(p.waitFor(60, java.util.concurrent.TimeUnit.SECONDS), "the child quits");
+        JsonNode summary = new ObjectMapper().readTree(keep.resolve(RunFolder.SUMMARY).toFile());
+        assertEquals("cancelled", summary.path("stop_reason").asText());
+        assertTrue(RunArchive.open(keep).snapshotCount() >= 3);
+    }
+
+    private static long count(Path folder) throws java.io.IOException {
+        if (!Files.isDirectory(folder)) {
+            return 0;
+        }
+        try (var s = Files.list(folder)) {
+            return s.filter(f -> f.getFileName().toString().endsWith(".h5")).count();
+        }
+    }
+
+    @Test
     void aTemporaryRunFolderGoesWhenTheSourceCloses() {
         LiveRun live = LiveRun.start(DemoRun.SCENARIO, DemoRun.cutDown(250), null);
         Path folder = live.dir();
