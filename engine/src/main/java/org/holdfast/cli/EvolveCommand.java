@@ -6,10 +6,13 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import java.util.concurrent.Callable;
+import java.util.concurrent.CountDownLatch;
+import java.util.concurrent.TimeUnit;
 
 import org.holdfast.fates.FateReport;
 import org.holdfast.fates.FateRun;
 import org.holdfast.output.RunFolder;
+import org.holdfast.output.RunPlots;
 import org.holdfast.output.RunWriter;
 import org.holdfast.run.RunObserver;
 import org.holdfast.run.Simulation;
@@ -77,7 +80,28 @@ public final class EvolveCommand implements Callable<Integer> {
         if (!quiet) {
             watchers.add(new RunProgress(o, RunProgress.onTerminal(), s.run().startGyr(), s.run().untilGyr()));
         }
-        FateRun.Outcome r = writer.run(sim, watchers);
+        // Ctrl+C (or a scheduler's SIGTERM) stops the run at its next step and lets it write its summary
+        CountDownLatch written = new CountDownLatch(1);
+        Thread onExit = new Thread(() -> {
+            sim.cancel();
+            try {
+                written.await(60, TimeUnit.SECONDS);
+            } catch (InterruptedException e) {
+                Thread.currentThread().interrupt();
+            }
+        }, "holdfast-evolve-exit");
+        Runtime.getRuntime().addShutdownHook(onExit);
+        FateRun.Outcome r;
+        try {
+            r = writer.run(sim, watchers);
+        } finally {
+            written.countDown();
+            try {
+                Runtime.getRuntime().removeShutdownHook(onExit);
+            } catch (IllegalStateException e) {
+                // already shutting down: the hook has its answer
+            }
+        }
         if (!quiet) {
             report(o, s, r, writer.dir());
         }
@@ -98,7 +122,13 @@ public final class EvolveCommand implements Callable<Integer> {
         o.println("Timeline:");
         o.print(FateReport.timeline(r.events()));
         o.println();
-        o.println("Run folder: " + dir + " (summary.json, tracks.csv, snapshots/, distances.png, energy.png, hubble.png)");
+        List<String> files = new ArrayList<>(List.of("summary.json", "tracks.csv", "snapshots/"));
+        for (String picture : List.of(RunPlots.DISTANCES, RunPlots.ENERGY, RunPlots.HUBBLE)) {
+            if (java.nio.file.Files.isRegularFile(dir.resolve(picture))) {
+                files.add(picture);
+            }
+        }
+        o.println("Run folder: " + dir + " (" + String.join(", ", files) + ")");
         o.flush();
     }
 

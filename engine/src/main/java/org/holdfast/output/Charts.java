@@ -118,15 +118,23 @@ public final class Charts {
 
     /** Writes the chart as PNG, to a temporary name first. */
     public static void savePng(XYChart chart, Path file) {
+        Path dir = file.toAbsolutePath().getParent();
+        String stem = file.getFileName().toString().replaceFirst("\\.png$", "");
+        Path part = dir.resolve(stem + ".part.png");
         try {
-            Path dir = file.toAbsolutePath().getParent();
             Files.createDirectories(dir);
-            String stem = file.getFileName().toString().replaceFirst("\\.png$", "");
-            Path tmp = dir.resolve(stem + ".part");
-            BitmapEncoder.saveBitmap(chart, tmp.toString(), BitmapFormat.PNG);
-            Files.move(dir.resolve(stem + ".part.png"), file, StandardCopyOption.REPLACE_EXISTING);
-        } catch (IOException e) {
-            throw new UncheckedIOException("cannot write " + file, e);
+            BitmapEncoder.saveBitmap(chart, dir.resolve(stem + ".part").toString(), BitmapFormat.PNG);
+            Files.move(part, file, StandardCopyOption.REPLACE_EXISTING);
+        } catch (IOException | RuntimeException e) {
+            try {
+                Files.deleteIfExists(part);
+            } catch (IOException ignored) {
+                // the first failure is the one to report
+            }
+            if (e instanceof IOException io) {
+                throw new UncheckedIOException("cannot write " + file, io);
+            }
+            throw (RuntimeException) e;
         }
     }
 }

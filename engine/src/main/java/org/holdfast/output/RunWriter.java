@@ -74,8 +74,22 @@ public final class RunWriter {
             tracks.close();
         }
         folder.writeJson(RunFolder.SUMMARY, summary(scenario, version, r));
-        RunPlots.write(folder.dir(), recorder, r.events(), scenario.name());
+        if (!jvmShuttingDown()) {
+            // the pictures need AWT, which refuses to start once the JVM is quitting (Ctrl+C)
+            RunPlots.write(folder.dir(), recorder, r.events(), scenario.name());
+        }
         return r;
+    }
+
+    private static boolean jvmShuttingDown() {
+        Thread probe = new Thread(() -> { });
+        try {
+            Runtime.getRuntime().addShutdownHook(probe);
+            Runtime.getRuntime().removeShutdownHook(probe);
+            return false;
+        } catch (IllegalStateException e) {
+            return true;
+        }
     }
 
     private static Map<String, Object> resolved(Scenario s, String version) {
