@@ -21,8 +21,6 @@ import org.holdfast.units.Units;
  */
 public final class Binding {
 
-    private static final BrentSolver SOLVER = new BrentSolver(1e-12, 1e-14);
-
     private Binding() {
     }
 
@@ -92,7 +90,8 @@ public final class Binding {
         if (fStar <= 0) {
             return Double.NaN;
         }
-        // f(zeroGravity) = -L^2 < 0, so the larger root lies in (r*, zeroGravity).
-        return SOLVER.solve(200, r -> gm * r - k * r * r * r * r - l2, rStar, zeroGravity);
+        // f(zeroGravity) = -L^2 < 0, so the larger root lies in (r*, zeroGravity). A solver keeps
+        // state between calls, so each call has its own: sweeps test binding on many threads.
+        return new BrentSolver(1e-12, 1e-14).solve(200, r -> gm * r - k * r * r * r * r - l2, rStar, zeroGravity);
     }
 }

@@ -1,5 +1,6 @@
 package org.holdfast.fates;
 
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -69,5 +70,48 @@ class BindingTest {
         double rStar = Math.cbrt(gm / (4 * K_LAMBDA));
         double l2 = 1.01 * (gm * rStar - K_LAMBDA * Math.pow(rStar, 4));
         assertTrue(Double.isNaN(Binding.barrierRadius(gm, K_LAMBDA, l2)));
+    }
+
+    /**
+     * Binding is tested on many threads at once in sweeps: every barrier radius found
+     * concurrently equals the one found alone (a solver shared between threads once mixed up the
+     * brackets of different calls).
+     */
+    @Test
+    void barrierRadiiFoundOnManyThreadsAtOnceEqualThoseFoundAlone() throws Exception {
+        int n = 4000;
+        double[] gm = new double[n];
+        double[] l2 = new double[n];
+        double k = 0.7 * Math.pow(org.holdfast.units.Units.hubbleToPerGyr(70), 2);
+        java.util.SplittableRandom rng = new java.util.SplittableRandom(3);
+        double[] alone = new double[n];
+        for (int i = 0; i < n; i++) {
+            gm[i] = org.holdfast.units.Units.G * Math.pow(10, 11 + 2 * rng.nextDouble());
+            double rStar = Math.cbrt(gm[i] / (4 * k));
+            double fMax = gm[i] * rStar - k * Math.pow(rStar, 4);
+            l2[i] = fMax * 0.98 * rng.nextDouble();
+            alone[i] = Binding.barrierRadius(gm[i], k, l2[i]);
+        }
+        double[] together = new double[n];
+        java.util.concurrent.ExecutorService pool = java.util.concurrent.Executors.newFixedThreadPool(4);
+        try {
+            java.util.List<java.util.concurrent.Future<?>> jobs = new java.util.ArrayList<>();
+            for (int w = 0; w < 4; w++) {
+                int start = w;
+                jobs.add(pool.submit(() -> {
+                    for (int rep = 0; rep < 5; rep++) {
+                        for (int i = start; i < n; i += 4) {
+                            together[i] = Binding.barrierRadius(gm[i], k, l2[i]);
+                        }
+                    }
+                }));
+            }
+            for (java.util.concurrent.Future<?> f : jobs) {
+                f.get();
+            }
+        } finally {
+            pool.shutdown();
+        }
+        assertArrayEquals(alone, together);
     }
 }
