@@ -347,7 +347,7 @@ public final class RunArchive {
                 return cache[s];
             }
         }
-        Snapshot snap = load(files[i]);
+        Snapshot snap = load(files[i], initialNames);
         int slot = nextSlot;
         nextSlot = 1 - nextSlot;
         cache[slot] = snap;
@@ -355,7 +355,13 @@ public final class RunArchive {
         return snap;
     }
 
-    private static Snapshot load(Path file) {
+    /**
+     * Reads one snapshot. Its {@code tracers/host} indexes the galaxies of that same file (after a
+     * merger the engine hands the absorbed galaxy's stars to the survivor and renumbers the rest),
+     * so each host is turned here into the index of that galaxy among the run's initial members:
+     * the index its colour comes from, so that stars always share their galaxy's colour.
+     */
+    private static Snapshot load(Path file, List<String> initialNames) {
         try (HdfFile h = new HdfFile(file)) {
             double t = number(h.getAttribute("t_gyr"), file, "t_gyr");
             double a = number(h.getAttribute("scale_factor"), file, "scale_factor");
@@ -368,7 +374,8 @@ public final class RunArchive {
             if (h.getChild("tracers") != null) {
                 tp = (float[][]) h.getDatasetByPath("tracers/position_kpc").getData();
                 tv = (float[][]) h.getDatasetByPath("tracers/velocity_kms").getData();
-                host = (int[]) h.getDatasetByPath("tracers/host").getData();
+                host = initialHosts((int[]) h.getDatasetByPath("tracers/host").getData(), names, initialNames,
+                        file);
             }
             return new Snapshot(t, a, names, pos, vel, tp, tv, host);
         } catch (ScenarioException e) {
@@ -376,6 +383,34 @@ public final class RunArchive {
         } catch (RuntimeException e) {
             throw new ScenarioException(file.toString(), null, "not a readable snapshot: " + e.getMessage());
         }
+    }
+
+    /**
+     * Hosts as indices into the initial members: host h (an index into {@code names}, this
+     * snapshot's galaxies) becomes the index of {@code names[h]} in {@code initialNames}; -1 (a
+     * flow tracer) stays.
+     *
+     * @throws ScenarioException naming the file for a host that is no galaxy of it
+     */
+    static int[] initialHosts(int[] host, String[] names, List<String> initialNames, Path file) {
+        int[] toInitial = new int[names.length];
+        for (int g = 0; g < names.length; g++) {
+            toInitial[g] = initialNames.indexOf(names[g]);
+            if (toInitial[g] < 0) {
+                throw new ScenarioException(file.toString(), "galaxies/name", "'" + names[g]
+                        + "' is not one of the run's initial galaxies");
+            }
+        }
+        int[] out = new int[host.length];
+        for (int j = 0; j < host.length; j++) {
+            int h = host[j];
+            if (h < -1 || h >= names.length) {
+                throw new ScenarioException(file.toString(), "tracers/host", "tracer " + j + " has host " + h
+                        + ", but the file holds " + names.length + " galaxies");
+            }
+            out[j] = h < 0 ? -1 : toInitial[h];
+        }
+        return out;
     }
 
     @Override
