@@ -238,7 +238,7 @@ public final class FilmPlan {
     private static void checkWithinRun(FilmSpec spec, RunArchive run, Node film) {
         double slack = 1e-9 * Math.max(1, Math.abs(run.latestGyr() - run.earliestGyr()));
         String[] keys = {"from_gyr", "to_gyr"};
-        double[] ends = {spec.clock().simGyr(0), spec.clock().simGyr(spec.lengthS())};
+        double[] ends = {spec.clock().simGyr(0), spec.clock().simGyr(spec.clock().endS())};
         for (int k = 0; k < 2; k++) {
             double t = ends[k];
             if (t < run.earliestGyr() - slack || t > run.latestGyr() + slack) {

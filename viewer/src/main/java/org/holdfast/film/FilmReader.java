@@ -83,7 +83,7 @@ public final class FilmReader {
         Stretch stretch = "linear".equals(film.choice("stretch", STRETCHES, "asinh"))
                 ? Stretch.linear(film.positive("linear_gain", 1))
                 : Stretch.asinh(film.positive("asinh_gain", 0.4), film.positive("asinh_softening", 9));
-        FilmClock clock = clock(film, lengthS);
+        FilmClock clock = clock(film, FilmSpec.lastFrameS(lengthS, rate));
         CameraTrack camera = camera(film, lengthS);
         return new FilmSpec(lengthS, rate, view, size[0], size[1], span, tilt, stretch, clock, camera, overlays(film));
     }
@@ -115,7 +115,8 @@ public final class FilmReader {
         return new int[] {w, h};
     }
 
-    private static FilmClock clock(Node film, double lengthS) {
+    /** The clock, from from_gyr on the first frame to to_gyr on the last, {@code endS} later. */
+    private static FilmClock clock(Node film, double endS) {
         String kind = film.choice("clock", CLOCKS, "linear");
         double from = film.number("from_gyr", 0);
         double to = film.number("to_gyr");
@@ -126,13 +127,13 @@ public final class FilmReader {
             if (film.hasInFile("final_gyr")) {
                 throw film.error("final_gyr", "only used with clock = \"countdown\"");
             }
-            return FilmClock.linear(lengthS, from, to);
+            return FilmClock.linear(endS, from, to);
         }
         double fin = film.number("final_gyr");
         if (!(fin > Math.max(from, to))) {
             throw film.error("final_gyr", "must come after from_gyr and to_gyr (got " + fmt(fin) + ")");
         }
-        return FilmClock.countdown(lengthS, from, to, fin);
+        return FilmClock.countdown(endS, from, to, fin);
     }
 
     private static CameraTrack camera(Node film, double lengthS) {

@@ -165,7 +165,7 @@ public final class RenderCommand implements Callable<Integer> {
 
     private int renderStill(PrintWriter o, RunArchive run, FilmSpec film) throws IOException {
         FilmPlan.checkTime("--still", still, run);
-        double filmS = Math.max(0, Math.min(film.lengthS(), film.clock().filmS(still)));
+        double filmS = Math.max(0, Math.min(film.clock().endS(), film.clock().filmS(still)));
         Path file = out != null ? out : Path.of(String.format(Locale.ROOT, "%s-still-%s.png", stem(), FilmPlan.plain(still)));
         ReplayScene scene = new ReplayScene(run);
         try (FrameRenderer r = new FrameRenderer(film.projection(), settings(film, scene))) {
