@@ -19,9 +19,8 @@ import com.fasterxml.jackson.databind.SerializationFeature;
 /**
  * {@code film.json} in a frames folder: what film the frames belong to (input, view, size,
  * rate, frame count, the clock's mapping and its times on the first and last frames, the camera
- * at both ends). A restarted render skips the frames
- * already there only when this matches, so a changed option can never leave a folder with
- * frames of two different films mixed.
+ * at both ends). A restarted render skips the frames already there only when this matches, so
+ * a changed option can never leave a folder with frames of two different films mixed.
  */
 final class FilmManifest {
 

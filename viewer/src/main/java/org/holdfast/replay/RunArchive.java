@@ -29,9 +29,10 @@ import io.jhdf.api.Attribute;
 
 /**
  * A finished run folder, opened for replay: the times of its snapshots (read from each file's
- * {@code t_gyr} attribute), the galaxies' saved paths from {@code tracks.csv} (for trails), and
- * the fate events and rip time from {@code summary.json}. Snapshots are loaded on demand and the
- * two most recent are kept, which is all a film moving through time needs.
+ * {@code t_gyr} attribute), the galaxies' saved paths and velocities from {@code tracks.csv}
+ * (for trails), and the fate events and rip time from {@code summary.json}. Snapshots are
+ * loaded on demand and the two most recent are kept, which is all a film moving through time
+ * needs.
  */
 public final class RunArchive {
 
@@ -225,8 +226,12 @@ public final class RunArchive {
         return kind == null || members.isEmpty() ? null : new FateEvent(tGyr, kind, members);
     }
 
+    /** Rows of a saved track: t (Gyr), x, y, z (kpc), vx, vy, vz (km/s). */
+    static final int TRACK_ROWS = 7;
+
     /**
-     * Saved centre paths per galaxy name: rows t, x, y, z; empty when there is no tracks.csv.
+     * Saved centre paths per galaxy name: rows t, x, y, z, vx, vy, vz; empty when there is no
+     * tracks.csv.
      *
      * @param growing the file may still be written: stop at the first row that is not whole
      */
@@ -242,7 +247,9 @@ public final class RunArchive {
                     }
                     rows.computeIfAbsent(rec.get("name"), k -> new ArrayList<>()).add(new double[] {
                         Double.parseDouble(rec.get("t_gyr")), Double.parseDouble(rec.get("x_kpc")),
-                        Double.parseDouble(rec.get("y_kpc")), Double.parseDouble(rec.get("z_kpc"))});
+                        Double.parseDouble(rec.get("y_kpc")), Double.parseDouble(rec.get("z_kpc")),
+                        Double.parseDouble(rec.get("vx_kms")), Double.parseDouble(rec.get("vy_kms")),
+                        Double.parseDouble(rec.get("vz_kms"))});
                 }
             } catch (IOException | RuntimeException e) {
                 throw new ScenarioException(file.toString(), null, "cannot read the tracks: " + e.getMessage());
@@ -250,9 +257,9 @@ public final class RunArchive {
         }
         Map<String, double[][]> out = new LinkedHashMap<>();
         rows.forEach((name, list) -> {
-            double[][] a = new double[4][list.size()];
+            double[][] a = new double[TRACK_ROWS][list.size()];
             for (int k = 0; k < list.size(); k++) {
-                for (int c = 0; c < 4; c++) {
+                for (int c = 0; c < TRACK_ROWS; c++) {
                     a[c][k] = list.get(k)[c];
                 }
             }
@@ -315,7 +322,10 @@ public final class RunArchive {
         return stoppedBeforeRip;
     }
 
-    /** Saved path of one galaxy: rows t, x, y, z (null when unknown). */
+    /**
+     * Saved path of one galaxy: rows t (Gyr), x, y, z (kpc), vx, vy, vz (km/s), one column per
+     * snapshot (null when unknown). A refresh replaces the arrays rather than changing them.
+     */
     double[][] track(String name) {
         return tracks.get(name);
     }
