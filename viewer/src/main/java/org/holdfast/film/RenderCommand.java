@@ -56,7 +56,8 @@ public final class RenderCommand implements Callable<Integer> {
     String projection;
 
     @Option(names = "--size", paramLabel = "WxH",
-            description = "Frame size in pixels, e.g. 1920x1080; a dome takes one number (2048). Even sides.")
+            description = "Frame size in pixels, e.g. 1920x1080; a dome takes one number (2048). Even sides "
+                    + "for a film's frames; a --still may be any size.")
     String size;
 
     @Option(names = "--fps", paramLabel = "N", description = "Frames per second of film, 1 to 240.")
@@ -128,7 +129,7 @@ public final class RenderCommand implements Callable<Integer> {
     }
 
     private FilmPlan.Options options() {
-        return new FilmPlan.Options(projection, size, fps, seconds, fromGyr, toGyr, filmFile, camera);
+        return new FilmPlan.Options(projection, size, fps, seconds, fromGyr, toGyr, filmFile, camera, still != null);
     }
 
     /** Checks that need no run, before anything is evolved or written. */
