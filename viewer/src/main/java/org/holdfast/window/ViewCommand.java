@@ -35,10 +35,11 @@ import picocli.CommandLine.Spec;
             "keys. With --frames it shows that many frames and quits: for rehearsals and tests.",
             "",
             "Examples:",
-            "  holdfast view runs/tessera-trio",
+            "  holdfast evolve scenarios/hollin-group.toml    # writes hollin-group-run/",
+            "  holdfast view hollin-group-run",
             "  holdfast view scenarios/hollin-group.toml --play --out hollin-live",
-            "  holdfast view runs/tessera-trio --at-gyr 4.5 --camera 30,15,800 \\",
-            "      --frames 1 --screenshot trio-4.5.png",
+            "  holdfast view hollin-group-run --at-gyr 4.2 --camera 40,25,350 \\",
+            "      --frames 1 --screenshot hollin-4.2.png",
             "  holdfast view --keys"
         })
 public final class ViewCommand implements Callable<Integer> {

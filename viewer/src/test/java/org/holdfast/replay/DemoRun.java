@@ -26,8 +26,11 @@ public final class DemoRun {
     /** End of the cut-down run, Gyr. */
     public static final double UNTIL_GYR = 2.0;
 
-    /** End of the cut-down run that sees the demo's first merger (Kellan into Cindral, near 2.1 Gyr), Gyr. */
-    public static final double MERGER_UNTIL_GYR = 2.5;
+    /**
+     * End of the longer cut-down run, Gyr: past the demo's first merger (Kellan into Cindral,
+     * near 2.1 Gyr) and the 4.2 Gyr the help examples show.
+     */
+    public static final double MERGER_UNTIL_GYR = 4.5;
 
     private static final Path[] RUNS = new Path[3];
 
