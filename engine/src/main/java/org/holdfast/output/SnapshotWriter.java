@@ -31,7 +31,8 @@ import io.jhdf.api.WritableGroup;
  * /galaxies/velocity_kms float64[3][N]
  * /tracers/position_kpc  float32[3][M]   (only when M > 0)
  * /tracers/velocity_kms  float32[3][M]
- * /tracers/host          int32[M]        index into /galaxies at the start of the run; -1 for flow
+ * /tracers/host          int32[M]        index into this file's /galaxies (a merged galaxy's stars pass
+ *                                        to its survivor); -1 for flow
  * </pre>
  */
 public final class SnapshotWriter implements RunObserver {

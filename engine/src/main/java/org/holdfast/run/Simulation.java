@@ -136,12 +136,8 @@ public final class Simulation implements RunView, AutoCloseable {
         long wall0 = System.nanoTime();
         double start = settings.startGyr();
         double until = settings.untilGyr();
-        double end = Math.max(history.earliestGyr(), Math.min(history.latestGyr(), until));
-        boolean limited = end != until;
-        if (limited) {
-            double margin = 1e-7 * Math.max(Math.abs(end - start), 1e-3);
-            end += until > end ? -margin : margin;
-        }
+        boolean limited = endsEarly();
+        double end = plannedEndGyr();
         double every = settings.snapshotEveryMyr() * Units.MYR;
         SnapshotClock clock = new SnapshotClock(start, end, every);
         observers.forEach(o -> o.init(this));
@@ -195,6 +191,27 @@ public final class Simulation implements RunView, AutoCloseable {
     }
 
     private double maxResidual;
+
+    /** Whether the expansion history ends before run.until_gyr, so the run must stop short. */
+    private boolean endsEarly() {
+        double until = settings.untilGyr();
+        return Math.max(history.earliestGyr(), Math.min(history.latestGyr(), until)) != until;
+    }
+
+    /**
+     * Where {@link #run} ends unless something stops it sooner (a bad number, a cancel):
+     * run.until_gyr, or just inside the expansion history where that ends first (before a big
+     * rip or crunch, after the Big Bang). Known before the run starts.
+     */
+    public double plannedEndGyr() {
+        double until = settings.untilGyr();
+        double end = Math.max(history.earliestGyr(), Math.min(history.latestGyr(), until));
+        if (endsEarly()) {
+            double margin = 1e-7 * Math.max(Math.abs(end - settings.startGyr()), 1e-3);
+            end += until > end ? -margin : margin;
+        }
+        return end;
+    }
 
     private void snapshot(List<RunObserver> observers) {
         updateEnergy();

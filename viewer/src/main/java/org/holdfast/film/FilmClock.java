@@ -6,6 +6,10 @@ package org.holdfast.film;
  * equal film time on each equal <em>ratio</em> of the time left before a final moment (the big
  * rip, or a horizon the user picks), so that the last stretch before a rip, where everything
  * happens, does not flash by.
+ *
+ * <p>A clock runs from its start time at film second 0 to its end time at film second
+ * {@link #endS()}; a film makes that the second of its last frame ({@link FilmSpec#lastFrameS}),
+ * so that the first frame shows the start and the last frame the end.
  */
 public interface FilmClock {
 
@@ -15,41 +19,49 @@ public interface FilmClock {
     /** Film second at which simulated time {@code tGyr} is shown. */
     double filmS(double tGyr);
 
-    /** Film length in seconds. */
-    double lengthS();
+    /** Film second at which the clock shows its end time; it stays there after. */
+    double endS();
 
-    /** Simulated time moves at a steady rate from {@code fromGyr} to {@code toGyr}. */
-    static FilmClock linear(double lengthS, double fromGyr, double toGyr) {
-        checkLength(lengthS);
+    /** The mapping in words, for a frames folder's manifest, e.g. "countdown to 41.5 Gyr". */
+    String describe();
+
+    /** Simulated time moves at a steady rate from {@code fromGyr} at 0 s to {@code toGyr} at {@code endS}. */
+    static FilmClock linear(double endS, double fromGyr, double toGyr) {
+        checkLength(endS);
         if (!Double.isFinite(fromGyr) || !Double.isFinite(toGyr) || fromGyr == toGyr) {
             throw new IllegalArgumentException("film clock needs two different finite times: " + fromGyr + ", " + toGyr);
         }
         return new FilmClock() {
             @Override
             public double simGyr(double filmS) {
-                double u = clamp(filmS / lengthS);
-                return fromGyr + (toGyr - fromGyr) * u;
+                double u = clamp(filmS / endS);
+                return u == 1 ? toGyr : fromGyr + (toGyr - fromGyr) * u;
             }
 
             @Override
             public double filmS(double tGyr) {
-                return lengthS * (tGyr - fromGyr) / (toGyr - fromGyr);
+                return endS * (tGyr - fromGyr) / (toGyr - fromGyr);
             }
 
             @Override
-            public double lengthS() {
-                return lengthS;
+            public double endS() {
+                return endS;
+            }
+
+            @Override
+            public String describe() {
+                return "linear";
             }
         };
     }
 
     /**
      * The time left before {@code finalGyr}, tau = finalGyr - t, shrinks (or grows)
-     * geometrically: log tau is linear in film time, from tau at {@code fromGyr} to tau at
-     * {@code toGyr}. Both must lie before {@code finalGyr}.
+     * geometrically: log tau is linear in film time, from tau at {@code fromGyr} (0 s) to tau at
+     * {@code toGyr} ({@code endS}). Both must lie before {@code finalGyr}.
      */
-    static FilmClock countdown(double lengthS, double fromGyr, double toGyr, double finalGyr) {
-        checkLength(lengthS);
+    static FilmClock countdown(double endS, double fromGyr, double toGyr, double finalGyr) {
+        checkLength(endS);
         double tau0 = finalGyr - fromGyr;
         double tau1 = finalGyr - toGyr;
         if (!(tau0 > 0) || !(tau1 > 0) || tau0 == tau1 || !Double.isFinite(finalGyr)) {
@@ -60,25 +72,30 @@ public interface FilmClock {
         return new FilmClock() {
             @Override
             public double simGyr(double filmS) {
-                double u = clamp(filmS / lengthS);
-                return finalGyr - tau0 * Math.exp(logRatio * u);
+                double u = clamp(filmS / endS);
+                return u == 1 ? toGyr : finalGyr - tau0 * Math.exp(logRatio * u);
             }
 
             @Override
             public double filmS(double tGyr) {
-                return lengthS * Math.log((finalGyr - tGyr) / tau0) / logRatio;
+                return endS * Math.log((finalGyr - tGyr) / tau0) / logRatio;
             }
 
             @Override
-            public double lengthS() {
-                return lengthS;
+            public double endS() {
+                return endS;
+            }
+
+            @Override
+            public String describe() {
+                return "countdown to " + finalGyr + " Gyr";
             }
         };
     }
 
-    private static void checkLength(double lengthS) {
-        if (!(lengthS > 0) || !Double.isFinite(lengthS)) {
-            throw new IllegalArgumentException("film length must be > 0 s: " + lengthS);
+    private static void checkLength(double endS) {
+        if (!(endS > 0) || !Double.isFinite(endS)) {
+            throw new IllegalArgumentException("the clock's end must be > 0 s into the film: " + endS);
         }
     }
 

@@ -18,9 +18,9 @@ import com.fasterxml.jackson.databind.SerializationFeature;
 
 /**
  * {@code film.json} in a frames folder: what film the frames belong to (input, view, size,
- * rate, frame count, clock and camera at both ends). A restarted render skips the frames
- * already there only when this matches, so a changed option can never leave a folder with
- * frames of two different films mixed.
+ * rate, frame count, the clock's mapping and its times on the first and last frames, the camera
+ * at both ends). A restarted render skips the frames already there only when this matches, so
+ * a changed option can never leave a folder with frames of two different films mixed.
  */
 final class FilmManifest {
 
@@ -78,6 +78,7 @@ final class FilmManifest {
         m.put("length_s", film.lengthS());
         m.put("first_gyr", film.clock().simGyr(0));
         m.put("last_gyr", film.clock().simGyr(film.filmSecondOf(film.frameCount())));
+        m.put("clock", film.clock().describe());
         m.put("camera", cameraOption == null ? "film" : cameraOption);
         m.put("eye_first_kpc", eye(film, 0));
         m.put("eye_last_kpc", eye(film, film.filmSecondOf(film.frameCount())));

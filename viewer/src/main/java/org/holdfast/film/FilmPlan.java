@@ -33,9 +33,13 @@ public final class FilmPlan {
 
     private static final Pattern SIZE = Pattern.compile("\\s*(\\d{1,6})\\s*(?:[xX]\\s*(\\d{1,6})\\s*)?");
 
-    /** What the command line said about the film; null fields were not given. */
+    /**
+     * What the command line said about the film; null fields were not given.
+     *
+     * @param still whether one still is made (any frame size) rather than a film (even sizes)
+     */
     public record Options(String projection, String size, Integer fps, Double seconds, Double fromGyr,
-            Double toGyr, Path filmFile, String camera) {
+            Double toGyr, Path filmFile, String camera, boolean still) {
     }
 
     private FilmPlan() {
@@ -61,7 +65,7 @@ public final class FilmPlan {
         Node film = root.table("film");
         String effectiveView = view != null ? view : film.has("view") ? film.string("view") : "flat";
         if (o.size() != null) {
-            int[] wh = size(o.size(), effectiveView);
+            int[] wh = size(o.size(), effectiveView, o.still());
             overrides.put("film.frame_px", "[" + wh[0] + ", " + wh[1] + "]");
         } else if (view != null && film.hasInFile("frame_px")) {
             int[] wh = defaultSize(view);
@@ -85,7 +89,7 @@ public final class FilmPlan {
                 film.has("from_gyr") ? Double.NaN : run.firstGyr()));
         putTime(overrides, "film.to_gyr", time("--to-gyr", o.toGyr(), run,
                 film.has("to_gyr") ? Double.NaN : run.lastGyr()));
-        FilmSpec spec = FilmReader.read(root);
+        FilmSpec spec = FilmReader.read(root, o.still());
         checkWithinRun(spec, run, film);
         if (spec.frameCount() > MAX_FRAMES) {
             String where = o.seconds() != null ? "--seconds" : o.fps() != null ? "--fps" : film.where("length_s");
@@ -125,7 +129,7 @@ public final class FilmPlan {
                     + "'; choose one of: " + String.join(", ", FilmReader.VIEWS));
         }
         if (o.size() != null) {
-            size(o.size(), o.projection() != null ? o.projection() : "any");
+            size(o.size(), o.projection() != null ? o.projection() : "any", o.still());
         }
         if (o.fps() != null && (o.fps() < 1 || o.fps() > 240)) {
             throw new ScenarioException("--fps", null, "must be between 1 and 240 frames per second (got " + o.fps() + ")");
@@ -183,8 +187,11 @@ public final class FilmPlan {
         return b.toString();
     }
 
-    /** The size option: WxH, or one number for a square dome frame; view "any" skips the shape checks. */
-    static int[] size(String text, String view) {
+    /**
+     * The size option: WxH, or one number for a square dome frame; view "any" skips the shape
+     * checks, and a still may have odd sides.
+     */
+    static int[] size(String text, String view, boolean still) {
         Matcher m = SIZE.matcher(text);
         if (!m.matches()) {
             throw new ScenarioException("--size", null, "expected WIDTHxHEIGHT in pixels (a dome: one number), e.g. "
@@ -198,8 +205,8 @@ public final class FilmPlan {
         if (w < 2 || h < 2 || w > 16384 || h > 16384) {
             throw new ScenarioException("--size", null, "each side must be 2 to 16384 pixels (got " + w + "x" + h + ")");
         }
-        if (w % 2 != 0 || h % 2 != 0) {
-            throw new ScenarioException("--size", null, "video encoders need even sizes (got " + w + "x" + h + ")");
+        if (!still && (w % 2 != 0 || h % 2 != 0)) {
+            throw new ScenarioException("--size", null, FilmReader.EVEN + " (got " + w + "x" + h + ")");
         }
         if ("dome".equals(view) && w != h) {
             throw new ScenarioException("--size", null, "a dome frame is square (got " + w + "x" + h + ")");
@@ -238,7 +245,7 @@ public final class FilmPlan {
     private static void checkWithinRun(FilmSpec spec, RunArchive run, Node film) {
         double slack = 1e-9 * Math.max(1, Math.abs(run.latestGyr() - run.earliestGyr()));
         String[] keys = {"from_gyr", "to_gyr"};
-        double[] ends = {spec.clock().simGyr(0), spec.clock().simGyr(spec.lengthS())};
+        double[] ends = {spec.clock().simGyr(0), spec.clock().simGyr(spec.clock().endS())};
         for (int k = 0; k < 2; k++) {
             double t = ends[k];
             if (t < run.earliestGyr() - slack || t > run.latestGyr() + slack) {

@@ -54,6 +54,8 @@ public final class FilmReader {
     static final List<String> STRETCHES = List.of("asinh", "linear");
     static final List<String> CLOCKS = List.of("linear", "countdown");
     static final List<String> CAMERAS = List.of("keyframes", "orbit", "approach");
+    /** Why a film's frames have even sides: they are a video's input (yuv420p halves both sides). */
+    static final String EVEN = "a film's frames need even sides for video encoders; a --still may be any size";
 
     private FilmReader() {
     }
@@ -64,6 +66,15 @@ public final class FilmReader {
      * @throws ScenarioException if the table is missing or any key is wrong
      */
     public static FilmSpec read(Node root) {
+        return read(root, false);
+    }
+
+    /**
+     * As {@link #read(Node)}; {@code still} lifts the even sizes a video needs, for one PNG.
+     *
+     * @throws ScenarioException if the table is missing or any key is wrong
+     */
+    static FilmSpec read(Node root, boolean still) {
         Node film = root.requireTable("film");
         film.allowOnly("length_s", "frame_rate", "view", "frame_px", "dome_span_deg", "dome_tilt_deg", "stretch",
                 "asinh_gain", "asinh_softening", "linear_gain", "clock", "from_gyr", "to_gyr", "final_gyr", "camera",
@@ -71,7 +82,7 @@ public final class FilmReader {
         double lengthS = film.positive("length_s");
         int rate = (int) film.integer("frame_rate", 1, 240, 30);
         String view = film.choice("view", VIEWS, "flat");
-        int[] size = frameSize(film, view);
+        int[] size = frameSize(film, view, still);
         double span = film.number("dome_span_deg", 180);
         if (!(span > 0 && span <= DomeProjection.MAX_SPAN_DEG)) {
             throw film.error("dome_span_deg", "must be in (0, 240] degrees (got " + span + ")");
@@ -83,12 +94,12 @@ public final class FilmReader {
         Stretch stretch = "linear".equals(film.choice("stretch", STRETCHES, "asinh"))
                 ? Stretch.linear(film.positive("linear_gain", 1))
                 : Stretch.asinh(film.positive("asinh_gain", 0.4), film.positive("asinh_softening", 9));
-        FilmClock clock = clock(film, lengthS);
+        FilmClock clock = clock(film, FilmSpec.lastFrameS(lengthS, rate));
         CameraTrack camera = camera(film, lengthS);
         return new FilmSpec(lengthS, rate, view, size[0], size[1], span, tilt, stretch, clock, camera, overlays(film));
     }
 
-    private static int[] frameSize(Node film, String view) {
+    private static int[] frameSize(Node film, String view, boolean still) {
         int[] def = switch (view) {
             case "dome" -> new int[] {2048, 2048};
             case "panorama" -> new int[] {4096, 2048};
@@ -103,8 +114,8 @@ public final class FilmReader {
         if (w != v[0] || h != v[1] || w < 2 || h < 2 || w > 16384 || h > 16384) {
             throw film.error("frame_px", "expected two whole numbers in [2, 16384] (got " + fmt(v[0]) + ", " + fmt(v[1]) + ")");
         }
-        if (w % 2 != 0 || h % 2 != 0) {
-            throw film.error("frame_px", "video encoders need even sizes (got " + w + " x " + h + ")");
+        if (!still && (w % 2 != 0 || h % 2 != 0)) {
+            throw film.error("frame_px", EVEN + " (got " + w + " x " + h + ")");
         }
         if ("dome".equals(view) && w != h) {
             throw film.error("frame_px", "a dome frame is square (got " + w + " x " + h + ")");
@@ -115,7 +126,8 @@ public final class FilmReader {
         return new int[] {w, h};
     }
 
-    private static FilmClock clock(Node film, double lengthS) {
+    /** The clock, from from_gyr on the first frame to to_gyr on the last, {@code endS} later. */
+    private static FilmClock clock(Node film, double endS) {
         String kind = film.choice("clock", CLOCKS, "linear");
         double from = film.number("from_gyr", 0);
         double to = film.number("to_gyr");
@@ -126,13 +138,13 @@ public final class FilmReader {
             if (film.hasInFile("final_gyr")) {
                 throw film.error("final_gyr", "only used with clock = \"countdown\"");
             }
-            return FilmClock.linear(lengthS, from, to);
+            return FilmClock.linear(endS, from, to);
         }
         double fin = film.number("final_gyr");
         if (!(fin > Math.max(from, to))) {
             throw film.error("final_gyr", "must come after from_gyr and to_gyr (got " + fmt(fin) + ")");
         }
-        return FilmClock.countdown(lengthS, from, to, fin);
+        return FilmClock.countdown(endS, from, to, fin);
     }
 
     private static CameraTrack camera(Node film, double lengthS) {

@@ -25,12 +25,26 @@ public record FilmSpec(double lengthS, int frameRate, String view, int widthPx, 
 
     /** Number of frames: length x frame rate, rounded. */
     public int frameCount() {
+        return frameCount(lengthS, frameRate);
+    }
+
+    /** Number of frames of a film {@code lengthS} long at {@code frameRate}: at least one. */
+    static int frameCount(double lengthS, int frameRate) {
         return Math.max(1, (int) Math.round(lengthS * frameRate));
     }
 
     /** Film second shown by frame {@code index} (1-based, as in the frame file names). */
     public double filmSecondOf(int index) {
         return (index - 1) / (double) frameRate;
+    }
+
+    /**
+     * The film second of the last frame, where the clock shows its end time: (frames - 1) /
+     * rate. A film of one frame shows only its start, and its clock ends at {@code lengthS}.
+     */
+    static double lastFrameS(double lengthS, int frameRate) {
+        int n = frameCount(lengthS, frameRate);
+        return n > 1 ? (n - 1) / (double) frameRate : lengthS;
     }
 
     /** The projection for this film's frames (a flat one follows each pose's field of view). */

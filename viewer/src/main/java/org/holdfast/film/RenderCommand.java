@@ -31,6 +31,7 @@ import picocli.CommandLine.Spec;
 /** {@code holdfast render}: the frames of a film, a video of them, or one still, without a window. */
 @Command(name = "render",
         mixinStandardHelpOptions = true,
+        header = "Film a run without a window: PNG frames, a video, or one still.",
         description = {
             "Renders a run as numbered PNG frames (frame_000001.png, ...), flat, fulldome",
             "fisheye (dome master) or 360-degree panorama, and encodes them into a video when",
@@ -42,9 +43,13 @@ import picocli.CommandLine.Spec;
             "the same command again to carry on: finished frames are kept and skipped.",
             "",
             "Examples:",
-            "  holdfast render runs/hollin --projection dome --size 2048 --fps 30 \\",
+            "  holdfast evolve scenarios/hollin-group.toml    # writes hollin-group-run/",
+            "  holdfast render hollin-group-run --film scenarios/hollin-group-film.toml \\",
+            "      --video hollin.mp4",
+            "  holdfast render hollin-group-run --projection dome --size 2048 --fps 30 \\",
             "      --seconds 40 --out dome-frames --video hollin-dome.mp4",
-            "  holdfast render runs/hollin --still 4.5 --camera 30,15,4000 --out poster.png"
+            "  holdfast render hollin-group-run --still 4.2 --camera 40,25,350 \\",
+            "      --out poster.png"
         })
 public final class RenderCommand implements Callable<Integer> {
 
@@ -56,7 +61,8 @@ public final class RenderCommand implements Callable<Integer> {
     String projection;
 
     @Option(names = "--size", paramLabel = "WxH",
-            description = "Frame size in pixels, e.g. 1920x1080; a dome takes one number (2048). Even sides.")
+            description = "Frame size in pixels, e.g. 1920x1080; a dome takes one number (2048). Even sides "
+                    + "for a film's frames; a --still may be any size.")
     String size;
 
     @Option(names = "--fps", paramLabel = "N", description = "Frames per second of film, 1 to 240.")
@@ -128,7 +134,7 @@ public final class RenderCommand implements Callable<Integer> {
     }
 
     private FilmPlan.Options options() {
-        return new FilmPlan.Options(projection, size, fps, seconds, fromGyr, toGyr, filmFile, camera);
+        return new FilmPlan.Options(projection, size, fps, seconds, fromGyr, toGyr, filmFile, camera, still != null);
     }
 
     /** Checks that need no run, before anything is evolved or written. */
@@ -165,7 +171,7 @@ public final class RenderCommand implements Callable<Integer> {
 
     private int renderStill(PrintWriter o, RunArchive run, FilmSpec film) throws IOException {
         FilmPlan.checkTime("--still", still, run);
-        double filmS = Math.max(0, Math.min(film.lengthS(), film.clock().filmS(still)));
+        double filmS = Math.max(0, Math.min(film.clock().endS(), film.clock().filmS(still)));
         Path file = out != null ? out : Path.of(String.format(Locale.ROOT, "%s-still-%s.png", stem(), FilmPlan.plain(still)));
         ReplayScene scene = new ReplayScene(run);
         try (FrameRenderer r = new FrameRenderer(film.projection(), settings(film, scene))) {

@@ -24,14 +24,19 @@ public record FateEvent(double tGyr, FateKind kind, List<String> members) {
         }
     }
 
-    /** The event as one line of plain words, e.g. "Tessaly merged with Brin". */
+    /**
+     * The event as one line of plain words, e.g. "Tessaly merged with Brin". Each kind is told
+     * with the word of its key in summary.json and the fate table (merged, escaped, ripped), so
+     * that a film's audience and a reader of the run's files name the same event alike.
+     */
     public String describe() {
         String first = members.get(0);
+        String all = String.join(" and ", members);
         return switch (kind) {
             case MERGED -> members.size() == 1 ? first + " merged"
                     : first + " merged with " + String.join(" and ", members.subList(1, members.size()));
-            case ESCAPED -> String.join(" and ", members) + " broke free";
-            case RIPPED -> String.join(" and ", members) + " torn apart";
+            case ESCAPED -> all + " escaped the group";
+            case RIPPED -> all + " ripped away by dark energy";
         };
     }
 }

@@ -172,7 +172,11 @@ public final class FrameRenderer implements AutoCloseable {
             int c = scene.colourIndex(g);
             double px = Double.NaN;
             double py = Double.NaN;
-            for (int k = 0; k < scene.trailCount(g); k++) {
+            int first = 0;
+            while (first + 1 < scene.trailCount(g) && Math.abs(now - scene.trailTGyr(g, first + 1)) >= span) {
+                first++; // segments wholly older than the span are not drawn
+            }
+            for (int k = first; k < scene.trailCount(g); k++) {
                 double t = scene.trailTGyr(g, k);
                 boolean seen = projectWorld(scene.trailX(g, k), scene.trailY(g, k), scene.trailZ(g, k), ex, ey, ez);
                 double qx = seen ? out[0] : Double.NaN;

@@ -15,7 +15,8 @@ import java.util.Set;
 /**
  * Draws the text and marks over a finished frame with Java2D (headless). The look: a condensed
  * sans-serif in warm paper white with a soft dark shadow, secondary figures in slate grey, fate
- * events in a pale gold, galaxy names in their own palette colour. On flat and panorama frames
+ * events in a pale gold, galaxy names in their own palette colour, placed so that they do not
+ * overlap ({@link LabelPlacer}). On flat and panorama frames
  * the clock sits at the lower left, events at the upper left and the scale bar at the lower
  * right; on a dome everything is centred inside the disc, the clock near the lower rim and
  * events near the upper rim, where a seated audience looks.
@@ -32,6 +33,10 @@ final class OverlayPainter {
     private final boolean dome;
     private final Font large;
     private final Font small;
+    private final LabelPlacer labels = new LabelPlacer();
+    private int[] labelWidth = new int[0];
+    private int[] labelXY = new int[0];
+    private boolean[] labelPlaced = new boolean[0];
 
     OverlayPainter(Set<Overlay> overlays, boolean dome, int height) {
         this.overlays = overlays;
@@ -72,7 +77,7 @@ final class OverlayPainter {
             int h = image.getHeight();
             int margin = Math.max(6, h / 30);
             if (overlays.contains(Overlay.NAMES)) {
-                paintNames(g, scene, galaxyPx);
+                paintNames(g, scene, galaxyPx, w, h);
             }
             paintClock(g, scene, w, h, margin);
             if (overlays.contains(Overlay.EVENTS)) {
@@ -86,17 +91,29 @@ final class OverlayPainter {
         }
     }
 
-    private void paintNames(Graphics2D g, SceneFrame scene, double[] px) {
+    /**
+     * Names beside their galaxies, placed by {@link LabelPlacer} in the scene's order of galaxies
+     * (the run's order of members), so that they never overlap; a name with no free spot is left
+     * out.
+     */
+    private void paintNames(Graphics2D g, SceneFrame scene, double[] px, int w, int h) {
         g.setFont(small);
+        FontMetrics fm = g.getFontMetrics(small);
         int gap = Math.max(4, small.getSize() / 2);
-        for (int i = 0; i < scene.galaxyCount(); i++) {
-            double x = px[2 * i];
-            double y = px[2 * i + 1];
-            if (Double.isNaN(x)) {
-                continue;
+        int n = scene.galaxyCount();
+        if (labelWidth.length < n) {
+            labelWidth = new int[n];
+            labelXY = new int[2 * n];
+            labelPlaced = new boolean[n];
+        }
+        for (int i = 0; i < n; i++) {
+            labelWidth[i] = fm.stringWidth(scene.name(i)) + 1; // + 1: the shadow
+        }
+        labels.place(n, px, labelWidth, fm.getAscent(), fm.getDescent() + 1, gap, w, h, labelXY, labelPlaced);
+        for (int i = 0; i < n; i++) {
+            if (labelPlaced[i]) {
+                text(g, scene.name(i), labelXY[2 * i], labelXY[2 * i + 1], new Color(Palette.rgb(scene.colourIndex(i))));
             }
-            text(g, scene.name(i), (int) Math.round(x) + gap, (int) Math.round(y) - gap,
-                    new Color(Palette.rgb(scene.colourIndex(i))));
         }
     }
 

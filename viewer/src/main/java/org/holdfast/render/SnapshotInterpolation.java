@@ -30,6 +30,21 @@ public final class SnapshotInterpolation {
     }
 
     /**
+     * Rate of change (per Gyr) of the cubic Hermite interpolant of {@link #hermite(double, double,
+     * double, double, double, double, double)} at t: the derivative of its basis functions.
+     */
+    public static double hermiteRate(double t0, double x0, double v0, double t1, double x1, double v1, double t) {
+        double h = t1 - t0;
+        double s = (t - t0) / h;
+        double s2 = s * s;
+        double d00 = 6 * s2 - 6 * s;
+        double d10 = 3 * s2 - 4 * s + 1;
+        double d01 = -6 * s2 + 6 * s;
+        double d11 = 3 * s2 - 2 * s;
+        return (d00 * x0 + d01 * x1) / h + d10 * v0 + d11 * v1;
+    }
+
+    /**
      * Cubic Hermite interpolation of whole arrays of coordinates.
      *
      * @param n number of values to interpolate

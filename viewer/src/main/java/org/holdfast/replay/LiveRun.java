@@ -42,7 +42,10 @@ public final class LiveRun implements AutoCloseable {
     private final Path dir;
     private final boolean temporary;
     private final double startGyr;
-    private final double untilGyr;
+    /** Where the run will end unless stopped sooner: run.until_gyr, or short of it before a rip. */
+    private final double endGyr;
+    /** The topmost folder this run created for a kept run (removed by {@link #discard}), or null. */
+    private final Path created;
     private final Simulation simulation;
     private final FateTracker fates;
     private final Thread thread;
@@ -56,11 +59,12 @@ public final class LiveRun implements AutoCloseable {
     private volatile String stopMessage;
     private volatile String failure;
 
-    private LiveRun(Scenario scenario, Path dir, boolean temporary, Simulation simulation) {
+    private LiveRun(Scenario scenario, Path dir, boolean temporary, Simulation simulation, Path created) {
         this.dir = dir;
         this.temporary = temporary;
+        this.created = created;
         this.startGyr = scenario.run().startGyr();
-        this.untilGyr = scenario.run().untilGyr();
+        this.endGyr = simulation.plannedEndGyr();
         this.reachedGyr = startGyr;
         this.simulation = simulation;
         this.fates = FateRun.tracker(scenario);
@@ -85,7 +89,7 @@ public final class LiveRun implements AutoCloseable {
         Simulation sim = FateRun.build(s, 0);
         LiveRun live;
         try {
-            live = new LiveRun(s, dir, keep == null, sim);
+            live = new LiveRun(s, dir, keep == null, sim, keep == null ? null : firstMissing(keep));
         } catch (RuntimeException e) {
             sim.close();
             if (keep == null) {
@@ -98,10 +102,22 @@ public final class LiveRun implements AutoCloseable {
         live.awaitSnapshots(1);
         if (live.failure != null && live.snapshots == 0) {
             String why = live.failure;
-            live.close();
+            live.discard();
             throw new ScenarioException(scenarioFile.toString(), null, why);
         }
         return live;
+    }
+
+    /** The topmost of {@code dir} and its parents that does not exist yet, or null when dir exists. */
+    private static Path firstMissing(Path dir) {
+        Path p = dir.toAbsolutePath().normalize();
+        if (Files.exists(p)) {
+            return null;
+        }
+        while (p.getParent() != null && !Files.exists(p.getParent())) {
+            p = p.getParent();
+        }
+        return p;
     }
 
     private static Path temporaryFolder() {
@@ -162,9 +178,13 @@ public final class LiveRun implements AutoCloseable {
         return startGyr;
     }
 
-    /** Where the run is heading, Gyr (it may stop sooner: before a rip, on a bad number). */
-    public double untilGyr() {
-        return untilGyr;
+    /**
+     * Where the run will end, Gyr, known before it starts: run.until_gyr, or just short of the
+     * end of the expansion history when that comes first (a big rip). It stops sooner only on
+     * a bad number or when cancelled.
+     */
+    public double plannedEndGyr() {
+        return endGyr;
     }
 
     /** Snapshots written so far. */
@@ -200,7 +220,7 @@ public final class LiveRun implements AutoCloseable {
         if (finished) {
             return String.format(Locale.ROOT, "evolved to %.4g Gyr: %s", reachedGyr, stopMessage);
         }
-        return String.format(Locale.ROOT, "evolving: %.4g of %.4g Gyr", reachedGyr, untilGyr);
+        return String.format(Locale.ROOT, "evolving: %.4g of %.4g Gyr", reachedGyr, endGyr);
     }
 
     /** Waits until at least {@code count} snapshots are written or the run has ended. */
@@ -219,7 +239,7 @@ public final class LiveRun implements AutoCloseable {
 
     /** Waits until the run has passed {@code tGyr} (in its own direction) or has ended. */
     public void awaitGyr(double tGyr) {
-        double dir = Math.signum(untilGyr - startGyr);
+        double dir = Math.signum(endGyr - startGyr);
         synchronized (progress) {
             while ((tGyr - reachedGyr) * dir > 0 && !finished) {
                 try {
@@ -241,6 +261,27 @@ public final class LiveRun implements AutoCloseable {
             // the JVM is already shutting down, and the hook is doing this
         }
         stop();
+    }
+
+    /**
+     * Closes the run and removes what it wrote into a kept folder: the folder itself (and any
+     * parents) when this run created it, else its contents. For a command that ends in bad
+     * input after the run started, so that it leaves nothing behind.
+     */
+    public void discard() {
+        close();
+        if (temporary) {
+            return;
+        }
+        if (created != null) {
+            TemporaryRun.delete(created);
+        } else {
+            try (var s = Files.list(dir)) {
+                s.forEach(TemporaryRun::delete);
+            } catch (IOException e) {
+                // the folder is gone or unreadable: nothing left to remove
+            }
+        }
     }
 
     private void stop() {

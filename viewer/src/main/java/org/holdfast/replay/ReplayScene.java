@@ -14,8 +14,9 @@ import org.holdfast.units.Units;
  * tracers both move along the cubic Hermite interpolant of their saved positions and velocities
  * (exact for motion that is cubic in time between snapshots); the scale factor, shown only as a
  * number, is blended linearly. A galaxy that merges between two snapshots glides from its own
- * last state towards its survivor's next one and disappears at the merger's time. Trails are
- * the saved snapshot positions up to now (from {@code tracks.csv}) ending at the current one.
+ * last state towards its survivor's next one and disappears at the merger's time. Trails follow
+ * the same curves through the saved track samples up to now (from {@code tracks.csv}, see
+ * {@link TrailCurves}) and end at the current position.
  *
  * <p>Holds its arrays and reuses them frame after frame; one scene per renderer.
  */
@@ -29,10 +30,17 @@ public final class ReplayScene {
     private double[] gx = new double[0];
     private double[] gy = new double[0];
     private double[] gz = new double[0];
+    /** Current velocities of the galaxies shown, kpc/Gyr (where their trails end). */
+    private double[] gvx = new double[0];
+    private double[] gvy = new double[0];
+    private double[] gvz = new double[0];
+    private final TrailCurves curves = new TrailCurves();
     private float[] tx = new float[0];
     private float[] ty = new float[0];
     private float[] tz = new float[0];
     private final List<FateEvent> shown = new ArrayList<>();
+    /** The event list {@link #shown} was taken from; null before the first frame. */
+    private List<FateEvent> shownFrom;
 
     public ReplayScene(RunArchive run) {
         this.run = run;
@@ -62,15 +70,35 @@ public final class ReplayScene {
         double a = s1 == s0 ? s0.scaleFactor()
                 : s0.scaleFactor() + (s1.scaleFactor() - s0.scaleFactor()) * (tGyr - s0.tGyr()) / (s1.tGyr() - s0.tGyr());
         frame.setClock(tGyr, a);
-        shown.clear();
+        showEvents(tGyr);
+        return frame;
+    }
+
+    /** Sets the events up to t, only when they differ from the last frame's (setEvents copies them). */
+    private void showEvents(double tGyr) {
+        List<FateEvent> all = run.events();
         double dir = run.lastGyr() >= run.firstGyr() ? 1 : -1;
-        for (FateEvent e : run.events()) {
+        boolean same = all == shownFrom;
+        int k = 0;
+        for (int i = 0; i < all.size(); i++) {
+            FateEvent e = all.get(i);
+            if ((e.tGyr() - tGyr) * dir <= 0) {
+                same &= k < shown.size() && shown.get(k) == e;
+                k++;
+            }
+        }
+        if (same && k == shown.size()) {
+            return;
+        }
+        shown.clear();
+        for (int i = 0; i < all.size(); i++) {
+            FateEvent e = all.get(i);
             if ((e.tGyr() - tGyr) * dir <= 0) {
                 shown.add(e);
             }
         }
+        shownFrom = all;
         frame.setEvents(shown);
-        return frame;
     }
 
     /** Position of galaxy {@code name} at {@code tGyr} into xyz; false when it is not there then. */
@@ -114,10 +142,16 @@ public final class ReplayScene {
                 gx[shownCount] = s0.positionKpc()[0][g];
                 gy[shownCount] = s0.positionKpc()[1][g];
                 gz[shownCount] = s0.positionKpc()[2][g];
+                gvx[shownCount] = s0.velocityKms()[0][g] * k;
+                gvy[shownCount] = s0.velocityKms()[1][g] * k;
+                gvz[shownCount] = s0.velocityKms()[2][g] * k;
             } else {
                 gx[shownCount] = coordinate(s0, g, s1, j, 0, t, k);
                 gy[shownCount] = coordinate(s0, g, s1, j, 1, t, k);
                 gz[shownCount] = coordinate(s0, g, s1, j, 2, t, k);
+                gvx[shownCount] = rate(s0, g, s1, j, 0, t, k);
+                gvy[shownCount] = rate(s0, g, s1, j, 1, t, k);
+                gvz[shownCount] = rate(s0, g, s1, j, 2, t, k);
             }
             shownCount++;
         }
@@ -132,11 +166,18 @@ public final class ReplayScene {
                 s1.tGyr(), s1.positionKpc()[axis][j], s1.velocityKms()[axis][j] * k, t);
     }
 
+    private static double rate(Snapshot s0, int g, Snapshot s1, int j, int axis, double t, double k) {
+        return SnapshotInterpolation.hermiteRate(s0.tGyr(), s0.positionKpc()[axis][g], s0.velocityKms()[axis][g] * k,
+                s1.tGyr(), s1.positionKpc()[axis][j], s1.velocityKms()[axis][j] * k, t);
+    }
+
     /** The merger that took {@code name} away between two snapshot times, or null. */
     private FateEvent mergerOf(String name, double t0, double t1) {
         double lo = Math.min(t0, t1);
         double hi = Math.max(t0, t1);
-        for (FateEvent e : run.events()) {
+        List<FateEvent> all = run.events();
+        for (int i = 0; i < all.size(); i++) {
+            FateEvent e = all.get(i);
             if (e.kind() == FateKind.MERGED && e.tGyr() >= lo && e.tGyr() <= hi
                     && e.members().indexOf(name) > 0) {
                 return e;
@@ -150,32 +191,59 @@ public final class ReplayScene {
     private double[][] trailY = new double[0][];
     private double[][] trailZ = new double[0][];
 
+    /**
+     * The trail of shown galaxy g at t: the dense curve through its saved samples before t, then
+     * the Hermite curve from the last of them to where the galaxy is now, moving as it moves now
+     * (for motion that is cubic between snapshots this is the very curve the galaxy follows).
+     */
     private void setTrail(int g, double t) {
         double[][] track = run.track(names[g]);
         if (track == null) {
             return;
         }
-        int saved = track[0].length;
-        if (trailT[g] == null || trailT[g].length < saved + 1) {
-            trailT[g] = new double[saved + 1];
-            trailX[g] = new double[saved + 1];
-            trailY[g] = new double[saved + 1];
-            trailZ[g] = new double[saved + 1];
-        }
         double dir = run.lastGyr() >= run.firstGyr() ? 1 : -1;
+        int saved = track[0].length;
         int m = 0;
         while (m < saved && (track[0][m] - t) * dir < 0) {
             m++;
         }
-        System.arraycopy(track[0], 0, trailT[g], 0, m);
-        System.arraycopy(track[1], 0, trailX[g], 0, m);
-        System.arraycopy(track[2], 0, trailY[g], 0, m);
-        System.arraycopy(track[3], 0, trailZ[g], 0, m);
-        trailT[g][m] = t;
-        trailX[g][m] = frame.galaxyX(g);
-        trailY[g][m] = frame.galaxyY(g);
-        trailZ[g][m] = frame.galaxyZ(g);
-        frame.setTrail(g, m + 1, trailT[g], trailX[g], trailY[g], trailZ[g]);
+        int p = TrailCurves.PIECES;
+        int prefix = m == 0 ? 0 : p * (m - 1) + 1;
+        int count = m == 0 ? 1 : prefix + p;
+        if (trailT[g] == null || trailT[g].length < count) {
+            int room = Math.max(count, saved == 0 ? 1 : p * saved + 1);
+            trailT[g] = new double[room];
+            trailX[g] = new double[room];
+            trailY[g] = new double[room];
+            trailZ[g] = new double[room];
+        }
+        if (m > 0) {
+            double[][] dense = curves.dense(names[g], track);
+            System.arraycopy(dense[0], 0, trailT[g], 0, prefix);
+            System.arraycopy(dense[1], 0, trailX[g], 0, prefix);
+            System.arraycopy(dense[2], 0, trailY[g], 0, prefix);
+            System.arraycopy(dense[3], 0, trailZ[g], 0, prefix);
+            lastPiece(g, track, m - 1, t, prefix);
+        }
+        trailT[g][count - 1] = t;
+        trailX[g][count - 1] = frame.galaxyX(g);
+        trailY[g][count - 1] = frame.galaxyY(g);
+        trailZ[g][count - 1] = frame.galaxyZ(g);
+        frame.setTrail(g, count, trailT[g], trailX[g], trailY[g], trailZ[g]);
+    }
+
+    /** The inner points of the last piece, from saved sample k to now, from column {@code at}. */
+    private void lastPiece(int g, double[][] track, int k, double t, int at) {
+        double c = Units.KMS_TO_KPC_PER_GYR;
+        double t0 = track[0][k];
+        int p = TrailCurves.PIECES;
+        for (int i = 1; i < p; i++) {
+            double ti = t0 + (t - t0) * i / p;
+            trailT[g][at + i - 1] = ti;
+            trailX[g][at + i - 1] = SnapshotInterpolation.hermite(t0, track[1][k], track[4][k] * c, t, gx[g], gvx[g], ti);
+            trailY[g][at + i - 1] = SnapshotInterpolation.hermite(t0, track[2][k], track[5][k] * c, t, gy[g], gvy[g], ti);
+            trailZ[g][at + i - 1] = SnapshotInterpolation.hermite(t0, track[3][k], track[6][k] * c, t, gz[g], gvz[g], ti);
+        }
     }
 
     private void fillTracers(Snapshot s0, Snapshot s1, double t) {
@@ -209,6 +277,9 @@ public final class ReplayScene {
             gx = new double[n];
             gy = new double[n];
             gz = new double[n];
+            gvx = new double[n];
+            gvy = new double[n];
+            gvz = new double[n];
             trailT = new double[n][];
             trailX = new double[n][];
             trailY = new double[n][];

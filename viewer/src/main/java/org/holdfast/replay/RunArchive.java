@@ -29,9 +29,10 @@ import io.jhdf.api.Attribute;
 
 /**
  * A finished run folder, opened for replay: the times of its snapshots (read from each file's
- * {@code t_gyr} attribute), the galaxies' saved paths from {@code tracks.csv} (for trails), and
- * the fate events and rip time from {@code summary.json}. Snapshots are loaded on demand and the
- * two most recent are kept, which is all a film moving through time needs.
+ * {@code t_gyr} attribute), the galaxies' saved paths and velocities from {@code tracks.csv}
+ * (for trails), and the fate events and rip time from {@code summary.json}. Snapshots are
+ * loaded on demand and the two most recent are kept, which is all a film moving through time
+ * needs.
  */
 public final class RunArchive {
 
@@ -225,8 +226,12 @@ public final class RunArchive {
         return kind == null || members.isEmpty() ? null : new FateEvent(tGyr, kind, members);
     }
 
+    /** Rows of a saved track: t (Gyr), x, y, z (kpc), vx, vy, vz (km/s). */
+    static final int TRACK_ROWS = 7;
+
     /**
-     * Saved centre paths per galaxy name: rows t, x, y, z; empty when there is no tracks.csv.
+     * Saved centre paths per galaxy name: rows t, x, y, z, vx, vy, vz; empty when there is no
+     * tracks.csv.
      *
      * @param growing the file may still be written: stop at the first row that is not whole
      */
@@ -242,7 +247,9 @@ public final class RunArchive {
                     }
                     rows.computeIfAbsent(rec.get("name"), k -> new ArrayList<>()).add(new double[] {
                         Double.parseDouble(rec.get("t_gyr")), Double.parseDouble(rec.get("x_kpc")),
-                        Double.parseDouble(rec.get("y_kpc")), Double.parseDouble(rec.get("z_kpc"))});
+                        Double.parseDouble(rec.get("y_kpc")), Double.parseDouble(rec.get("z_kpc")),
+                        Double.parseDouble(rec.get("vx_kms")), Double.parseDouble(rec.get("vy_kms")),
+                        Double.parseDouble(rec.get("vz_kms"))});
                 }
             } catch (IOException | RuntimeException e) {
                 throw new ScenarioException(file.toString(), null, "cannot read the tracks: " + e.getMessage());
@@ -250,9 +257,9 @@ public final class RunArchive {
         }
         Map<String, double[][]> out = new LinkedHashMap<>();
         rows.forEach((name, list) -> {
-            double[][] a = new double[4][list.size()];
+            double[][] a = new double[TRACK_ROWS][list.size()];
             for (int k = 0; k < list.size(); k++) {
-                for (int c = 0; c < 4; c++) {
+                for (int c = 0; c < TRACK_ROWS; c++) {
                     a[c][k] = list.get(k)[c];
                 }
             }
@@ -315,7 +322,10 @@ public final class RunArchive {
         return stoppedBeforeRip;
     }
 
-    /** Saved path of one galaxy: rows t, x, y, z (null when unknown). */
+    /**
+     * Saved path of one galaxy: rows t (Gyr), x, y, z (kpc), vx, vy, vz (km/s), one column per
+     * snapshot (null when unknown). A refresh replaces the arrays rather than changing them.
+     */
     double[][] track(String name) {
         return tracks.get(name);
     }
@@ -347,7 +357,7 @@ public final class RunArchive {
                 return cache[s];
             }
         }
-        Snapshot snap = load(files[i]);
+        Snapshot snap = load(files[i], initialNames);
         int slot = nextSlot;
         nextSlot = 1 - nextSlot;
         cache[slot] = snap;
@@ -355,7 +365,13 @@ public final class RunArchive {
         return snap;
     }
 
-    private static Snapshot load(Path file) {
+    /**
+     * Reads one snapshot. Its {@code tracers/host} indexes the galaxies of that same file (after a
+     * merger the engine hands the absorbed galaxy's stars to the survivor and renumbers the rest),
+     * so each host is turned here into the index of that galaxy among the run's initial members:
+     * the index its colour comes from, so that stars always share their galaxy's colour.
+     */
+    private static Snapshot load(Path file, List<String> initialNames) {
         try (HdfFile h = new HdfFile(file)) {
             double t = number(h.getAttribute("t_gyr"), file, "t_gyr");
             double a = number(h.getAttribute("scale_factor"), file, "scale_factor");
@@ -368,7 +384,8 @@ public final class RunArchive {
             if (h.getChild("tracers") != null) {
                 tp = (float[][]) h.getDatasetByPath("tracers/position_kpc").getData();
                 tv = (float[][]) h.getDatasetByPath("tracers/velocity_kms").getData();
-                host = (int[]) h.getDatasetByPath("tracers/host").getData();
+                host = initialHosts((int[]) h.getDatasetByPath("tracers/host").getData(), names, initialNames,
+                        file);
             }
             return new Snapshot(t, a, names, pos, vel, tp, tv, host);
         } catch (ScenarioException e) {
@@ -376,6 +393,34 @@ public final class RunArchive {
         } catch (RuntimeException e) {
             throw new ScenarioException(file.toString(), null, "not a readable snapshot: " + e.getMessage());
         }
+    }
+
+    /**
+     * Hosts as indices into the initial members: host h (an index into {@code names}, this
+     * snapshot's galaxies) becomes the index of {@code names[h]} in {@code initialNames}; -1 (a
+     * flow tracer) stays.
+     *
+     * @throws ScenarioException naming the file for a host that is no galaxy of it
+     */
+    static int[] initialHosts(int[] host, String[] names, List<String> initialNames, Path file) {
+        int[] toInitial = new int[names.length];
+        for (int g = 0; g < names.length; g++) {
+            toInitial[g] = initialNames.indexOf(names[g]);
+            if (toInitial[g] < 0) {
+                throw new ScenarioException(file.toString(), "galaxies/name", "'" + names[g]
+                        + "' is not one of the run's initial galaxies");
+            }
+        }
+        int[] out = new int[host.length];
+        for (int j = 0; j < host.length; j++) {
+            int h = host[j];
+            if (h < -1 || h >= names.length) {
+                throw new ScenarioException(file.toString(), "tracers/host", "tracer " + j + " has host " + h
+                        + ", but the file holds " + names.length + " galaxies");
+            }
+            out[j] = h < 0 ? -1 : toInitial[h];
+        }
+        return out;
     }
 
     @Override

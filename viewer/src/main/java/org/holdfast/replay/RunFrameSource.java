@@ -201,7 +201,7 @@ public final class RunFrameSource implements FrameSource {
 
     @Override
     public double runEndGyr() {
-        return live != null && growing() ? live.untilGyr() : scene.run().lastGyr();
+        return live != null && growing() ? live.plannedEndGyr() : scene.run().lastGyr();
     }
 
     @Override
@@ -234,17 +234,31 @@ public final class RunFrameSource implements FrameSource {
     }
 
     @Override
-    public void close() {
-        if (renderer != null) {
-            renderer.close();
-            renderer = null;
+    public void discard() {
+        if (live == null) {
+            close();
+            return;
         }
+        closeRenderer();
+        live.discard();
+    }
+
+    @Override
+    public void close() {
+        closeRenderer();
         if (owned != null) {
             try {
                 owned.close();
             } catch (Exception e) {
                 // nothing useful to do about a temporary folder that would not go
             }
+        }
+    }
+
+    private void closeRenderer() {
+        if (renderer != null) {
+            renderer.close();
+            renderer = null;
         }
     }
 }

@@ -3,7 +3,9 @@ package org.holdfast.replay;
 /**
  * One saved state of a run, as {@link org.holdfast.output.SnapshotWriter} lays it out: galaxies
  * (names, masses, positions in kpc, velocities in km/s as float64[3][N]) and tracers (float32
- * positions and velocities as [3][M], host index into the galaxies at the start, -1 for flow).
+ * positions and velocities as [3][M]). The file's host indexes its own galaxies; here each host
+ * is already the index of the star's galaxy among the run's initial members (its colour index),
+ * -1 for flow.
  */
 record Snapshot(double tGyr, double scaleFactor, String[] names, double[][] positionKpc, double[][] velocityKms,
         float[][] tracerKpc, float[][] tracerKms, int[] tracerHost) {

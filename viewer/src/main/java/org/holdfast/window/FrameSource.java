@@ -55,7 +55,7 @@ public interface FrameSource extends AutoCloseable {
         return startGyr();
     }
 
-    /** Where the run ends, or is heading while it grows, Gyr. */
+    /** Where the run ends, or will end while it grows (known before it gets there), Gyr. */
     default double runEndGyr() {
         return endGyr();
     }
@@ -67,6 +67,15 @@ public interface FrameSource extends AutoCloseable {
     /** One line on the state of the source (a run's progress) for the title bar; "" for none. */
     default String status() {
         return "";
+    }
+
+    /**
+     * Closes the source and removes what it wrote for this command (a live run's kept folder),
+     * for a command that ends in bad input after the source was opened. Closing afterwards does
+     * nothing more.
+     */
+    default void discard() {
+        close();
     }
 
     /** Releases what the source holds (files, a live run). */

@@ -35,10 +35,11 @@ import picocli.CommandLine.Spec;
             "keys. With --frames it shows that many frames and quits: for rehearsals and tests.",
             "",
             "Examples:",
-            "  holdfast view runs/tessera-trio",
+            "  holdfast evolve scenarios/hollin-group.toml    # writes hollin-group-run/",
+            "  holdfast view hollin-group-run",
             "  holdfast view scenarios/hollin-group.toml --play --out hollin-live",
-            "  holdfast view runs/tessera-trio --at-gyr 4.5 --camera 30,15,800 \\",
-            "      --frames 1 --screenshot trio-4.5.png",
+            "  holdfast view hollin-group-run --at-gyr 4.2 --camera 40,25,350 \\",
+            "      --frames 1 --screenshot hollin-4.2.png",
             "  holdfast view --keys"
         })
 public final class ViewCommand implements Callable<Integer> {
@@ -155,15 +156,17 @@ public final class ViewCommand implements Callable<Integer> {
             return fail((outDir != null ? "--out" : "--set") + ": only for a scenario, and '" + input
                     + "' is a run folder");
         }
+        FrameSource opened = null;
         try (FrameSource source = opener.open(input, sets, outDir)) {
+            opened = source;
             ViewState start;
             try {
                 start = startView(source, cam);
             } catch (BadOption e) {
-                return fail(e.getMessage());
+                return fail(source, e.getMessage());
             }
             if (!GlWindow.displayNamed()) {
-                return fail(GlWindow.NO_DISPLAY + "; use holdfast render to make pictures without a window");
+                return fail(source, GlWindow.NO_DISPLAY + "; use holdfast render to make pictures without a window");
             }
             if (scenario && source.growing()) {
                 out.println("evolving " + input + " as it plays, into "
@@ -176,7 +179,7 @@ public final class ViewCommand implements Callable<Integer> {
             if (atGyr != null) {
                 source.awaitGyr(atGyr);
                 if (!(atGyr >= source.startGyr() && atGyr <= source.endGyr())) {
-                    return fail("--at-gyr: " + plain(atGyr) + " was not reached; " + source.status());
+                    return fail(source, "--at-gyr: " + plain(atGyr) + " was not reached; " + source.status());
                 }
             }
             Controls controls = new Controls(source, start);
@@ -198,7 +201,7 @@ public final class ViewCommand implements Callable<Integer> {
         } catch (CannotOpenException e) {
             return fail(e.getMessage());
         } catch (NoDisplayException e) {
-            return fail(e.getMessage() + "; use holdfast render to make pictures without a window");
+            return fail(opened, e.getMessage() + "; use holdfast render to make pictures without a window");
         }
     }
 
@@ -254,7 +257,7 @@ public final class ViewCommand implements Callable<Integer> {
         if (atGyr != null) {
             if (!(atGyr >= lo && atGyr <= hi)) {
                 throw new BadOption("--at-gyr: " + plain(atGyr) + " lies outside this run, which spans "
-                        + plain(lo) + " to " + plain(hi) + " Gyr");
+                        + shown(lo, false) + " to " + shown(hi, true) + " Gyr");
             }
             t = atGyr;
         }
@@ -270,8 +273,29 @@ public final class ViewCommand implements Callable<Integer> {
         return Double.isFinite(v) ? java.math.BigDecimal.valueOf(v).stripTrailingZeros().toPlainString() : Double.toString(v);
     }
 
+    /** A span end for messages: six significant digits, rounded inwards so the span shown holds. */
+    private static String shown(double v, boolean upper) {
+        if (!Double.isFinite(v)) {
+            return Double.toString(v);
+        }
+        java.math.RoundingMode inwards = upper ? java.math.RoundingMode.FLOOR : java.math.RoundingMode.CEILING;
+        return new java.math.BigDecimal(v).round(new java.math.MathContext(6, inwards)).stripTrailingZeros()
+                .toPlainString();
+    }
+
     private static double clampDistance(double d) {
         return Math.max(Camera.MIN_DISTANCE_KPC, Math.min(Camera.MAX_DISTANCE_KPC, d));
+    }
+
+    /**
+     * As {@link #fail(String)}, once the source is open: a scenario's run is stopped and what it
+     * wrote into --out removed first, so bad input leaves nothing behind.
+     */
+    private int fail(FrameSource source, String message) {
+        if (source != null) {
+            source.discard();
+        }
+        return fail(message);
     }
 
     private int fail(String message) {

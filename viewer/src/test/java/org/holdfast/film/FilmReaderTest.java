@@ -1,5 +1,6 @@
 package org.holdfast.film;
 
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertThrows;
@@ -67,6 +68,40 @@ class FilmReaderTest {
         assertTrue(spec.overlays().contains(Overlay.CLOCK));
         CameraPose pose = spec.camera().poseAt(0, new CameraPose());
         assertEquals(Math.hypot(600, 100), pose.eyeKpc().length(), 1e-9);
+    }
+
+    /** The frames' times, first to last. */
+    private static double[] frameTimes(FilmSpec spec) {
+        double[] t = new double[spec.frameCount()];
+        for (int i = 1; i <= t.length; i++) {
+            t[i - 1] = spec.clock().simGyr(spec.filmSecondOf(i));
+        }
+        return t;
+    }
+
+    @Test
+    void theFirstFrameShowsFromGyrAndTheLastToGyr() {
+        String linear = """
+                [film]
+                length_s = 1
+                frame_rate = 3
+                from_gyr = 0
+                to_gyr = 10
+                camera = "orbit"
+                [film.orbit]
+                radius_kpc = 600
+                """;
+        assertArrayEquals(new double[] {0, 5, 10}, frameTimes(read(linear)), 1e-12);
+        double[] countdown = frameTimes(read(DOME));
+        assertEquals(720, countdown.length);
+        assertEquals(5, countdown[0], 0);
+        assertEquals(40, countdown[719], 0, "the last frame shows to_gyr, the last instant asked for");
+        // equal ratios of the time left (1 Gyr before final_gyr = 41) from frame to frame
+        double ratio = (41 - countdown[1]) / (41 - countdown[0]);
+        assertEquals(Math.pow(1.0 / 36, 1.0 / 719), ratio, 1e-12);
+        assertEquals(ratio, (41 - countdown[719]) / (41 - countdown[718]), 1e-9);
+        String one = linear.replace("length_s = 1", "length_s = 0.2");
+        assertArrayEquals(new double[] {0}, frameTimes(read(one)), 0, "a film of one frame shows its start");
     }
 
     @Test

@@ -33,7 +33,7 @@ class RenderBadInputTest {
     void badOptionValuesAreNamed() {
         refused(new String[] {"--size", "0x0"}, "--size", "2 to 16384");
         refused(new String[] {"--size", "40000x20000"}, "--size", "2 to 16384");
-        refused(new String[] {"--size", "33x20"}, "--size", "even");
+        refused(new String[] {"--size", "33x20"}, "--size", "frames need even sides", "33x20");
         refused(new String[] {"--size", "big"}, "--size", "WIDTHxHEIGHT");
         refused(new String[] {"--size", "64"}, "--size", "flat frame needs WIDTHxHEIGHT");
         refused(new String[] {"--projection", "dome", "--size", "64x32"}, "--size", "square");
@@ -47,6 +47,21 @@ class RenderBadInputTest {
         refused(new String[] {"--camera", "30,95,800"}, "--camera", "pitch");
         refused(new String[] {"--threads", "0"}, "--threads");
         refused(new String[] {"--video", "film.avi"}, "--video", ".mp4");
+    }
+
+    @Test
+    void aStillMayHaveOddSides() throws Exception {
+        Path poster = dir.resolve("odd.png");
+        ViewRun.Result r = FilmRun.render(DemoRun.folder().toString(), "--still", "1", "--size", "321x181", "--out",
+                poster.toString(), "--quiet");
+        assertEquals(0, r.exitCode(), r.err());
+        assertEquals(321, FilmRun.image(poster).getWidth());
+        assertEquals(181, FilmRun.image(poster).getHeight());
+        Path dome = dir.resolve("dome.png");
+        r = FilmRun.render(DemoRun.folder().toString(), "--still", "1", "--projection", "dome", "--size", "101", "--out",
+                dome.toString(), "--quiet");
+        assertEquals(0, r.exitCode(), r.err());
+        assertEquals(101, FilmRun.image(dome).getHeight());
     }
 
     @Test

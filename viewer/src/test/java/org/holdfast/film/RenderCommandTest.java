@@ -85,6 +85,63 @@ class RenderCommandTest {
     }
 
     @Test
+    void theFirstFrameShowsFromGyrAndTheLastFrameToGyr() throws Exception {
+        Path out = dir.resolve("frames");
+        String[] film = {"--film", DemoRun.FILM.toString(), "--size", "64x36", "--quiet"};
+        ViewRun.Result r = FilmRun.render(concat(new String[] {run(), "--from-gyr", "0.5", "--to-gyr", "2",
+            "--seconds", "1", "--fps", "3", "--out", out.toString()}, film));
+        assertEquals(0, r.exitCode(), r.err());
+        assertFalse(Files.exists(out.resolve(FrameFiles.name(4))), "three frames");
+        String manifest = Files.readString(out.resolve(FilmManifest.FILE));
+        assertTrue(manifest.contains("\"first_gyr\" : 0.5") && manifest.contains("\"last_gyr\" : 2.0"), manifest);
+        // a still of the same film at a time shows what the frame at that time shows
+        String[] times = {"0.5", "1.25", "2"};
+        for (int i = 1; i <= 3; i++) {
+            Path still = dir.resolve("still-" + i + ".png");
+            ViewRun.Result s = FilmRun.render(concat(new String[] {run(), "--from-gyr", "0.5", "--to-gyr", "2",
+                "--seconds", "1", "--fps", "3", "--still", times[i - 1], "--out", still.toString()}, film));
+            assertEquals(0, s.exitCode(), s.err());
+            assertEquals(0, FilmRun.maxDifference(FilmRun.image(still), FilmRun.image(out.resolve(FrameFiles.name(i)))),
+                    "frame " + i + " shows " + times[i - 1] + " Gyr");
+        }
+    }
+
+    @Test
+    void aFolderOfTheSameEndsButAnotherCountdownIsNotMixedWithThisOne() throws Exception {
+        Path out = dir.resolve("frames");
+        String film = """
+                [film]
+                length_s = 1
+                frame_rate = 3
+                frame_px = [32, 18]
+                clock = "countdown"
+                from_gyr = 0
+                to_gyr = 2
+                final_gyr = 3
+                camera = "orbit"
+                [film.orbit]
+                radius_kpc = 800
+                """;
+        Path first = Files.writeString(dir.resolve("countdown-a.toml"), film);
+        Path second = Files.writeString(dir.resolve("countdown-b.toml"), film.replace("final_gyr = 3", "final_gyr = 9"));
+        assertEquals(0, FilmRun.render(run(), "--film", first.toString(), "--out", out.toString(), "--quiet").exitCode());
+        byte[] middle = Files.readAllBytes(out.resolve(FrameFiles.name(2)));
+        ViewRun.Result again = FilmRun.render(run(), "--film", first.toString(), "--out", out.toString());
+        assertEquals(0, again.exitCode(), again.err());
+        assertTrue(again.out().contains("0 frames drawn, 3 already there"), again.out());
+        // same first and last frame times, other times between: another film
+        ViewRun.Result r = FilmRun.render(run(), "--film", second.toString(), "--out", out.toString());
+        assertOneLine(r, "--out", "different film");
+        assertArrayEquals(middle, Files.readAllBytes(out.resolve(FrameFiles.name(2))));
+    }
+
+    private static String[] concat(String[] a, String[] b) {
+        String[] all = java.util.Arrays.copyOf(a, a.length + b.length);
+        System.arraycopy(b, 0, all, a.length, b.length);
+        return all;
+    }
+
+    @Test
     void framesAreByteIdenticalOnOneThreadAndOnTwo() throws Exception {
         for (String view : new String[] {"flat", "dome"}) {
             String size = "flat".equals(view) ? "64x36" : "48";
@@ -121,10 +178,11 @@ class RenderCommandTest {
         ViewRun.Result r = FilmRun.render(run(), "--size", "32x18", "--seconds", "0.5", "--fps", "4", "--out",
                 out.toString());
         assertEquals(0, r.exitCode(), r.err());
-        assertTrue(r.out().contains("rendering 2 frames (32x18 flat, 4 per second, 0 to 1 Gyr)"), r.out());
+        assertTrue(r.out().contains("rendering 2 frames (32x18 flat, 4 per second, 0 to 2 Gyr)"), r.out());
         assertTrue(Files.isRegularFile(out.resolve(FrameFiles.name(2))));
         String manifest = Files.readString(out.resolve(FilmManifest.FILE));
         assertTrue(manifest.contains("\"first_gyr\" : 0.0"), manifest);
+        assertTrue(manifest.contains("\"last_gyr\" : 2.0"), "the last frame shows the run's end: " + manifest);
     }
 
     @Test

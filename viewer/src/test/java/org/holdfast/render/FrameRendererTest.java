@@ -383,8 +383,8 @@ class FrameRendererTest {
     @Test
     void eventWordsNameTheMembers() {
         assertEquals("Brin merged with Orrin", new FateEvent(1, FateKind.MERGED, List.of("Brin", "Orrin")).describe());
-        assertEquals("Tessaly broke free", new FateEvent(1, FateKind.ESCAPED, List.of("Tessaly")).describe());
-        assertEquals("Vell torn apart", new FateEvent(1, FateKind.RIPPED, List.of("Vell")).describe());
+        assertEquals("Tessaly escaped the group", new FateEvent(1, FateKind.ESCAPED, List.of("Tessaly")).describe());
+        assertEquals("Vell ripped away by dark energy", new FateEvent(1, FateKind.RIPPED, List.of("Vell")).describe());
     }
 
     private static float maxOf(LightBuffer light, int channel) {

@@ -56,6 +56,20 @@ class SnapshotInterpolationTest {
         assertEquals(-1, (5 - b) / eps, 1e-5);
     }
 
+    /** The rate is the interpolant's own derivative: central differences agree to O(eps^2) (common practice). */
+    @Test
+    void rateIsTheDerivativeOfTheInterpolant() {
+        double eps = 1e-5;
+        for (double t = 0.5; t <= 0.9; t += 0.05) {
+            double ahead = SnapshotInterpolation.hermite(0.5, 1, 0.3, 0.9, 2, -0.2, t + eps);
+            double behind = SnapshotInterpolation.hermite(0.5, 1, 0.3, 0.9, 2, -0.2, t - eps);
+            assertEquals((ahead - behind) / (2 * eps), SnapshotInterpolation.hermiteRate(0.5, 1, 0.3, 0.9, 2, -0.2, t),
+                    1e-8, "at " + t);
+        }
+        assertEquals(0.3, SnapshotInterpolation.hermiteRate(0.5, 1, 0.3, 0.9, 2, -0.2, 0.5), 1e-14);
+        assertEquals(-0.2, SnapshotInterpolation.hermiteRate(0.5, 1, 0.3, 0.9, 2, -0.2, 0.9), 1e-14);
+    }
+
     @Test
     void linearBlendOfTracers() {
         float[] out = new float[2];

@@ -26,7 +26,13 @@ public final class DemoRun {
     /** End of the cut-down run, Gyr. */
     public static final double UNTIL_GYR = 2.0;
 
-    private static final Path[] RUNS = new Path[2];
+    /**
+     * End of the longer cut-down run, Gyr: past the demo's first merger (Kellan into Cindral,
+     * near 2.1 Gyr) and the 4.2 Gyr the help examples show.
+     */
+    public static final double MERGER_UNTIL_GYR = 4.5;
+
+    private static final Path[] RUNS = new Path[3];
 
     private DemoRun() {
     }
@@ -36,7 +42,12 @@ public final class DemoRun {
 
     /** The --set options that cut the demo down (1,680 tracers instead of 11,500). */
     public static List<String> cutDown(int snapshotEveryMyr) {
-        List<String> s = new ArrayList<>(List.of("run.until_gyr=" + UNTIL_GYR, "flow.count=300",
+        return cutDown(snapshotEveryMyr, UNTIL_GYR);
+    }
+
+    /** As {@link #cutDown(int)}, to {@code untilGyr}. */
+    public static List<String> cutDown(int snapshotEveryMyr, double untilGyr) {
+        List<String> s = new ArrayList<>(List.of("run.until_gyr=" + untilGyr, "flow.count=300",
                 "galaxy.Aldermere.stars.count=400", "galaxy.Bracken.stars.count=300",
                 "galaxy.Cindral.stars.count=200", "run.snapshot_every_myr=" + snapshotEveryMyr));
         for (String d : DWARFS) {
@@ -55,13 +66,22 @@ public final class DemoRun {
         return folder(1, 125);
     }
 
+    /** The same run carried on to {@link #MERGER_UNTIL_GYR}, past its first merger. */
+    public static synchronized Path mergerFolder() {
+        return folder(2, 250, MERGER_UNTIL_GYR);
+    }
+
     private static Path folder(int slot, int everyMyr) {
+        return folder(slot, everyMyr, UNTIL_GYR);
+    }
+
+    private static Path folder(int slot, int everyMyr, double untilGyr) {
         if (RUNS[slot] == null) {
             try {
                 Path dir = Files.createTempDirectory("holdfast-demo-").resolve("run");
                 List<String> args = new ArrayList<>(List.of("evolve", SCENARIO.toString(), "--out", dir.toString(),
                         "--quiet"));
-                for (String s : cutDown(everyMyr)) {
+                for (String s : cutDown(everyMyr, untilGyr)) {
                     args.add("--set");
                     args.add(s);
                 }

@@ -35,7 +35,7 @@ class LiveRunTest {
         List<Double> ends = new ArrayList<>();
         try (RunFrameSource s = RunFrameSource.following(LiveRun.start(DemoRun.SCENARIO, DemoRun.cutDown(125), keep))) {
             assertEquals(0.0, s.startGyr(), 0, "the run starts today");
-            assertEquals(DemoRun.UNTIL_GYR, s.runEndGyr(), 0, "and heads for run.until_gyr");
+            assertEquals(DemoRun.UNTIL_GYR, s.runEndGyr(), 0, "and ends at run.until_gyr");
             while (s.growing()) {
                 ends.add(s.endGyr());
                 Thread.sleep(5);
@@ -59,6 +59,28 @@ class LiveRunTest {
         }
         assertTrue(Files.isRegularFile(keep.resolve(RunFolder.SUMMARY)), "a kept folder stays");
         assertTrue(Files.isRegularFile(keep.resolve("tracks.csv")));
+    }
+
+    @Test
+    void aRunThatARipCutsShortKnowsItsEndBeforeItGetsThere() throws Exception {
+        Path keep = dir.resolve("rip");
+        List<String> sets = new ArrayList<>(DemoRun.cutDown(2000, 40));
+        sets.add("cosmology.dark_energy.w0=-1.5");
+        double planned;
+        try (RunFrameSource s = RunFrameSource.following(LiveRun.start(DemoRun.SCENARIO, sets, keep))) {
+            assertTrue(s.growing());
+            planned = s.runEndGyr();
+            assertTrue(planned > 21 && planned < 22, "short of run.until_gyr = 40, before the rip: " + planned);
+            assertTrue(s.endGyr() < planned, "known before the run gets there");
+            s.awaitGyr(planned);
+            while (s.growing()) {
+                Thread.sleep(5);
+            }
+            assertEquals(planned, s.endGyr(), 0, "the run ends where it said it would");
+        }
+        JsonNode summary = new ObjectMapper().readTree(keep.resolve(RunFolder.SUMMARY).toFile());
+        assertEquals("before_rip", summary.path("stop_reason").asText());
+        assertEquals(planned, summary.path("end_gyr").asDouble(), 0);
     }
 
     @Test

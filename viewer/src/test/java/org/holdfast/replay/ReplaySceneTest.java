@@ -82,13 +82,106 @@ class ReplaySceneTest {
         double t = 0.5 * (run.timeOf(3) + run.timeOf(4));
         SceneFrame f = scene.at(t);
         double[][] p = saved(run.dir(), 2);
+        int pieces = TrailCurves.PIECES;
         for (int g = 0; g < f.galaxyCount(); g++) {
-            assertEquals(5, f.trailCount(g), "snapshots 0..3, then now");
-            assertEquals(t, f.trailTGyr(g, 4), 0.0);
-            assertEquals(f.galaxyX(g), f.trailX(g, 4), 0.0);
-            assertEquals(run.timeOf(2), f.trailTGyr(g, 2), 1e-12);
-            assertEquals(p[1][g], f.trailY(g, 2), 1e-9);
+            assertEquals(4 * pieces + 1, f.trailCount(g), "snapshots 0..3, then now, each step in " + pieces);
+            assertEquals(t, f.trailTGyr(g, 4 * pieces), 0.0);
+            assertEquals(f.galaxyX(g), f.trailX(g, 4 * pieces), 0.0);
+            assertEquals(run.timeOf(2), f.trailTGyr(g, 2 * pieces), 1e-12);
+            assertEquals(p[1][g], f.trailY(g, 2 * pieces), 1e-9);
         }
+    }
+
+    /**
+     * Every point of a trail, saved samples, the pieces between them and the piece ending now,
+     * lies where the galaxy itself is shown at that point's time: trails follow the galaxies'
+     * own cubic motion between snapshots (for the last piece: a cubic Hermite interpolant
+     * reproduces a cubic exactly, Burden and Faires, Numerical Analysis, 9th ed. 2011, sec. 3.4).
+     */
+    @Test
+    void trailsFollowTheCurvesTheGalaxiesMoveOn() {
+        RunArchive run = RunArchive.open(DemoRun.folder());
+        ReplayScene scene = new ReplayScene(run);
+        ReplayScene probe = new ReplayScene(run);
+        double t = run.timeOf(6) + 0.3 * (run.timeOf(7) - run.timeOf(6));
+        SceneFrame f = scene.at(t);
+        double[] xyz = new double[3];
+        int points = 0;
+        for (int g = 0; g < f.galaxyCount(); g++) {
+            for (int k = 0; k < f.trailCount(g); k++) {
+                double tk = f.trailTGyr(g, k);
+                assertTrue(probe.centreOf(f.name(g), tk, xyz));
+                double off = Math.sqrt(Math.pow(f.trailX(g, k) - xyz[0], 2) + Math.pow(f.trailY(g, k) - xyz[1], 2)
+                        + Math.pow(f.trailZ(g, k) - xyz[2], 2));
+                assertEquals(0, off, 1e-9 * Math.max(1, Math.abs(xyz[0]) + Math.abs(xyz[1]) + Math.abs(xyz[2])),
+                        f.name(g) + " at " + tk + " Gyr");
+                points++;
+            }
+        }
+        assertTrue(points > 7 * TrailCurves.PIECES * f.galaxyCount(), "points checked: " + points);
+    }
+
+    /** A trail turns gently from piece to piece: far less than the polygon of its saved samples. */
+    @Test
+    void trailsShowNoCorners() {
+        RunArchive run = RunArchive.open(DemoRun.folder());
+        SceneFrame f = new ReplayScene(run).at(run.lastGyr());
+        double worstTrail = 0;
+        double worstPolygon = 0;
+        int pieces = TrailCurves.PIECES;
+        for (int g = 0; g < f.galaxyCount(); g++) {
+            for (int k = 1; k + 1 < f.trailCount(g); k++) {
+                worstTrail = Math.max(worstTrail, turn(f, g, k - 1, k, k + 1));
+            }
+            for (int k = pieces; k + pieces < f.trailCount(g); k += pieces) {
+                worstPolygon = Math.max(worstPolygon, turn(f, g, k - pieces, k, k + pieces));
+            }
+        }
+        System.out.printf(java.util.Locale.ROOT, "largest turn: trail %.2f deg, saved polygon %.2f deg%n",
+                worstTrail, worstPolygon);
+        assertTrue(worstPolygon > 20, "the orbits bend visibly between snapshots: " + worstPolygon);
+        assertTrue(worstTrail < worstPolygon / 4, "trail " + worstTrail + " deg vs polygon " + worstPolygon);
+    }
+
+    /**
+     * Once its arrays have grown and its two snapshots are loaded, a scene fills frame after
+     * frame without allocating: trails included. A round of 100 frames is measured a few times,
+     * because the JIT may rebuild an optimised-away object once while it recompiles; an
+     * allocation per frame would show in every round.
+     */
+    @Test
+    void framesWithinOneSnapshotIntervalAllocateNothing() {
+        RunArchive run = RunArchive.open(DemoRun.folder());
+        ReplayScene scene = new ReplayScene(run);
+        double t0 = run.timeOf(5);
+        double h = run.timeOf(6) - t0;
+        for (int i = 0; i < 2000; i++) {
+            scene.at(t0 + h * (i % 100) / 100.0);
+        }
+        com.sun.management.ThreadMXBean threads =
+                (com.sun.management.ThreadMXBean) java.lang.management.ManagementFactory.getThreadMXBean();
+        long id = Thread.currentThread().getId();
+        long[] rounds = new long[5];
+        long least = Long.MAX_VALUE;
+        for (int k = 0; k < rounds.length && least > 0; k++) {
+            long before = threads.getThreadAllocatedBytes(id);
+            for (int i = 0; i < 100; i++) {
+                scene.at(t0 + h * i / 100.0);
+            }
+            rounds[k] = threads.getThreadAllocatedBytes(id) - before;
+            least = Math.min(least, rounds[k]);
+        }
+        assertEquals(0, least, "bytes allocated by rounds of 100 frames: " + java.util.Arrays.toString(rounds));
+    }
+
+    /** Angle in degrees between the directions a to b and b to c of trail g. */
+    private static double turn(SceneFrame f, int g, int a, int b, int c) {
+        double[] u = {f.trailX(g, b) - f.trailX(g, a), f.trailY(g, b) - f.trailY(g, a), f.trailZ(g, b) - f.trailZ(g, a)};
+        double[] v = {f.trailX(g, c) - f.trailX(g, b), f.trailY(g, c) - f.trailY(g, b), f.trailZ(g, c) - f.trailZ(g, b)};
+        double dot = u[0] * v[0] + u[1] * v[1] + u[2] * v[2];
+        double nu = Math.sqrt(u[0] * u[0] + u[1] * u[1] + u[2] * u[2]);
+        double nv = Math.sqrt(v[0] * v[0] + v[1] * v[1] + v[2] * v[2]);
+        return Math.toDegrees(Math.acos(Math.max(-1, Math.min(1, dot / (nu * nv)))));
     }
 
     @Test

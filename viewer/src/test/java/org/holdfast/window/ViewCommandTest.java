@@ -96,6 +96,31 @@ class ViewCommandTest {
         assertFalse(Files.exists(out), "nothing written");
     }
 
+    /** A live demo run whose phantom dark energy (w0 = -1.5) rips the universe near 21.67 Gyr. */
+    private static ViewRun.Result ripping(Path out, String atGyr) {
+        java.util.List<String> args = new java.util.ArrayList<>(java.util.List.of("view",
+                org.holdfast.replay.DemoRun.SCENARIO.toString(), "--at-gyr", atGyr, "--out", out.toString(),
+                "--frames", "1", "--set", "cosmology.dark_energy.w0=-1.5"));
+        for (String s : org.holdfast.replay.DemoRun.cutDown(2000, 40)) {
+            args.add("--set");
+            args.add(s);
+        }
+        return ViewRun.run(FrameSources::open, args.toArray(String[]::new));
+    }
+
+    @Test
+    void anAtGyrPastTheRipIsRefusedAtOnceAndTheRunFolderRemoved() throws IOException {
+        Path out = dir.resolve("made").resolve("live");
+        assertOneLineNaming(ripping(out, "30"), "--at-gyr: 30 lies outside this run, which spans 0 to 21.67");
+        assertFalse(Files.exists(dir.resolve("made")), "the folders this command made are gone");
+        Path empty = Files.createDirectory(dir.resolve("empty"));
+        assertOneLineNaming(ripping(empty, "25"), "--at-gyr: 25");
+        assertTrue(Files.isDirectory(empty), "a folder given empty stays");
+        try (var s = Files.list(empty)) {
+            assertEquals(0, s.count(), "and is empty again");
+        }
+    }
+
     @Test
     void keysPrintsTheKeyList() {
         ViewRun.Result r = pattern("view", "--keys");
