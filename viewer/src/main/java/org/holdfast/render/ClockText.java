@@ -35,9 +35,21 @@ public final class ClockText {
         return String.format(Locale.ROOT, "%+.1f Gyr", tGyr);
     }
 
-    /** The scale factor: "a = 1.834". */
+    /**
+     * The scale factor: "a = 1.834"; from 1000 on (the last stretch before a big rip) in powers
+     * of ten, "a = 4.08 x 10^7", rather than a row of digits.
+     */
     public static String scaleFactor(double a) {
-        return String.format(Locale.ROOT, "a = %.3f", a);
+        if (!(a >= 1000) || Double.isInfinite(a)) {
+            return String.format(Locale.ROOT, "a = %.3f", a);
+        }
+        int exponent = (int) Math.floor(Math.log10(a));
+        double mantissa = a / Math.pow(10, exponent);
+        if (mantissa >= 9.995) {
+            mantissa /= 10;
+            exponent++;
+        }
+        return String.format(Locale.ROOT, "a = %.2f x 10^%d", mantissa, exponent);
     }
 
     /** A length for the scale bar: "50 kpc", "2 Mpc". */

@@ -57,6 +57,7 @@ public final class LiveRun implements AutoCloseable {
     private volatile List<FateEvent> eventsSoFar = List.of();
     private volatile boolean finished;
     private volatile String stopMessage;
+    private volatile double stoppedGyr = Double.NaN;
     private volatile String failure;
 
     private LiveRun(Scenario scenario, Path dir, boolean temporary, Simulation simulation, Path created) {
@@ -132,6 +133,7 @@ public final class LiveRun implements AutoCloseable {
         try {
             FateRun.Outcome r = writer.run(simulation, fates, List.of(new Feed()));
             stopMessage = r.result().reason().message();
+            stoppedGyr = r.result().endGyr();
         } catch (RuntimeException e) {
             failure = e.getMessage() == null ? e.toString() : e.getMessage();
         } finally {
@@ -218,7 +220,9 @@ public final class LiveRun implements AutoCloseable {
             return "the run failed: " + failure;
         }
         if (finished) {
-            return String.format(Locale.ROOT, "evolved to %.4g Gyr: %s", reachedGyr, stopMessage);
+            // a cancelled run stops between snapshots: say up to where it can be shown
+            return stoppedGyr == reachedGyr ? "run ended: " + stopMessage
+                    : String.format(Locale.ROOT, "run ended: %s; snapshots up to %.4g Gyr", stopMessage, reachedGyr);
         }
         return String.format(Locale.ROOT, "evolving: %.4g of %.4g Gyr", reachedGyr, endGyr);
     }

@@ -14,6 +14,9 @@ class ClockTextTest {
         assertEquals("2.1 billion years ago", ClockText.words(-2.1));
         assertEquals("+12.40 Gyr from today", ClockText.gyr(12.4));
         assertEquals("a = 1.834", ClockText.scaleFactor(1.8341));
+        assertEquals("a = 999.500", ClockText.scaleFactor(999.5));
+        assertEquals("a = 4.08 x 10^7", ClockText.scaleFactor(40792621.724), "no row of digits near a rip");
+        assertEquals("a = 1.00 x 10^4", ClockText.scaleFactor(9999.9), "rounding carries into the exponent");
         assertEquals("+3.1 Gyr", ClockText.gyrShort(3.14));
         assertEquals("-0.5 Gyr", ClockText.gyrShort(-0.46));
     }
