@@ -60,6 +60,12 @@ public final class EvolveCommand implements Callable<Integer> {
         Scenario s = scenario.read(until == null ? Double.NaN : until);
         Path dirPath = RunFolder.choose(out, s.file());
         Simulation sim = FateRun.build(s, 0);
+        try {
+            RunFolder.makeFolder(dirPath, "--out");
+        } catch (RuntimeException e) {
+            sim.close();
+            throw e;
+        }
         PrintWriter o = spec.commandLine().getOut();
         if (!quiet) {
             o.printf(Locale.ROOT, "evolving \"%s\": %d galaxies, %,d tracers, %s to %s (Gyr from today)%n",

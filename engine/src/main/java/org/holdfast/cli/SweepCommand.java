@@ -24,6 +24,7 @@ import org.holdfast.sweep.Sweep;
 import org.holdfast.sweep.SweepEngine;
 import org.holdfast.sweep.SweepPlan;
 import org.holdfast.sweep.SweepProgress;
+import org.holdfast.sweep.ValueCheck;
 
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
@@ -169,6 +170,7 @@ public final class SweepCommand implements Callable<Integer> {
             throw new ScenarioException("--yes", null, "the sweep has " + runs + " runs (more than " + CONFIRM_ABOVE_RUNS
                     + "); add --yes if you mean it");
         }
+        ValueCheck.readAtEveryValue(scenario, fixed.asMap(), axes, untilGyr == null ? Double.NaN : untilGyr);
         return plan;
     }
 

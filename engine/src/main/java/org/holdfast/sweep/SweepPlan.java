@@ -101,16 +101,26 @@ public record SweepPlan(int format, String scenario, String scenarioSha256, Map<
         return o;
     }
 
+    /** The keys that the axes vary, in order. */
+    public List<String> variedKeys() {
+        List<String> keys = new ArrayList<>();
+        for (Axis a : axes) {
+            keys.add(a.key());
+        }
+        return keys;
+    }
+
     /** The runs of this shard that are not yet done, with their seeds, in run order. */
     public List<RunTask> pendingTasks(BitSet done) {
         List<RunTask> tasks = new ArrayList<>();
         SeedPlan seeds = new SeedPlan(seed);
+        List<String> varied = variedKeys();
         for (int p = 0; p < points(); p++) {
             long[] s = seeds.forPoint(p, samples);
             for (int k = 0; k < samples; k++) {
                 long run = (long) p * samples + k;
                 if (inShard(run) && !done.get((int) run)) {
-                    tasks.add(new RunTask(run, p, k, s[k], overridesAt(p)));
+                    tasks.add(new RunTask(run, p, k, s[k], overridesAt(p), varied));
                 }
             }
         }

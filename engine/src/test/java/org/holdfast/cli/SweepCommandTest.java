@@ -225,6 +225,40 @@ class SweepCommandTest {
     }
 
     @Test
+    void aBadVariedValueIsBlamedOnVaryAndLeavesNoFolder() {
+        Path out = tmp.resolve("new/deeper");
+        assertBadInput("--vary: galaxy.Vesk.mass_msun: must be > 0 (got -1.00000e+11)", "sweep", scenario.toString(),
+                "--out", out.toString(), "--vary", "galaxy.Vesk.mass_msun=-1e11,1e11");
+        assertFalse(Files.exists(tmp.resolve("new")), "no folder left behind");
+        // The bad value last: still refused before anything is written.
+        assertBadInput("--vary: cosmology.h0: must be > 0 km/s/Mpc", "sweep", scenario.toString(),
+                "--out", out.toString(), "--vary", "cosmology.h0=70,-70");
+        assertFalse(Files.exists(tmp.resolve("new")), "no folder left behind");
+        assertBadInput("--set: galaxy.Vesk.mass_msun: must be > 0", "sweep", scenario.toString(),
+                "--out", out.toString(), "--set", "galaxy.Vesk.mass_msun=-5");
+        assertFalse(Files.exists(tmp.resolve("new")), "no folder left behind");
+    }
+
+    @Test
+    void valuesThatFailOnlyTogetherAreFoundByTheirRunAndTheNewFolderIsRemoved() {
+        // Vesk at (0, 0, 0) is where Orrimal is. Each value alone is fine, so the check before
+        // the runs passes; the fourth run meets the combination after three runs were made.
+        Path out = tmp.resolve("combo");
+        assertBadInput("--vary: galaxy.Vesk.position_kpc: galaxy 'Vesk' is at the same place as 'Orrimal'", "sweep",
+                scenario.toString(), "--out", out.toString(), "--workers", "1",
+                "--vary", "galaxy.Vesk.position_kpc.0=300,0", "--vary", "galaxy.Vesk.position_kpc.1=5,0");
+        assertFalse(Files.exists(out), "the folder this sweep made is gone");
+    }
+
+    @Test
+    void anOutputFolderThatCannotBeMadeIsOneLineNamingOut() throws IOException {
+        Path blocker = tmp.resolve("a-file");
+        Files.writeString(blocker, "not a folder");
+        assertBadInput("--out: cannot create the folder " + blocker.resolve("s") + ": ", "sweep", scenario.toString(),
+                "--out", blocker.resolve("s").toString(), "--vary", "cosmology.dark_energy.w0=-1.2,-1");
+    }
+
+    @Test
     void varyingAnOptionalKeyTheFileLeavesOutIsAllowed() {
         CommandRunner.Result r = CommandRunner.run("sweep", scenario.toString(), "--out", tmp.resolve("opt").toString(),
                 "--vary", "galaxy.Vesk.velocity_kms.2=0,10");
