@@ -168,6 +168,27 @@ class EvolveCommandTest {
     }
 
     @Test
+    void sampleOnAScenarioWithoutUncertainNumbersSaysItChangesNothing() throws IOException {
+        Path f = dir.resolve("plain-pair.toml");
+        Files.writeString(f, SCENARIO.substring(0, SCENARIO.indexOf("[[galaxy]]")) + """
+                [[galaxy]]
+                name = "Arn"
+                mass_msun = 1e12
+                position_kpc = [0, 0, 0]
+                [[galaxy]]
+                name = "Bel"
+                mass_msun = 2e11
+                position_kpc = [300, 0, 0]
+                velocity_kms = [0, 80, 0]
+                """);
+        CommandRunner.Result r = CommandRunner.run("evolve", f.toString(), "--out", dir.resolve("sampled").toString(),
+                "--sample", "3", "--until", "0.2");
+        assertEquals(0, r.exitCode(), r.err());
+        assertTrue(r.out().contains("\n  the scenario has no uncertain numbers, so --sample 3 changes nothing\n"), r.out());
+        assertEquals("", r.err());
+    }
+
+    @Test
     void tracersThatCannotFitInTheHeapAreRefusedBeforeAnythingIsAllocated() throws IOException {
         Path f = dir.resolve("huge.toml");
         Files.writeString(f, SCENARIO.replace("count = 300", "count = 90000000"));
