@@ -148,13 +148,13 @@ public final class Sweep {
         Path file = dir.resolve(PLAN_FILE);
         if (Files.exists(file)) {
             SweepPlan there = readPlan(dir);
-            String diff = plan.differenceFrom(there);
+            SweepPlan.Difference diff = plan.differenceFrom(there);
             if (diff == null && (there.shardIndex() != plan.shardIndex() || there.shardCount() != plan.shardCount())) {
-                diff = "--shard " + there.shardIndex() + "/" + there.shardCount();
+                diff = new SweepPlan.Difference(shard(there), shard(plan));
             }
             if (diff != null) {
-                throw new ScenarioException("--out", dir.toString(),
-                        "holds a different sweep (it was made with " + diff + "); choose another folder");
+                throw new ScenarioException("--out", dir.toString(), "holds a different sweep: the folder was made with "
+                        + diff.other() + ", this command asks for " + diff.mine() + "; choose another folder");
             }
             return;
         }
@@ -166,6 +166,10 @@ public final class Sweep {
         }
         byte[] json = Journal.JSON.copy().enable(SerializationFeature.INDENT_OUTPUT).writeValueAsBytes(plan);
         Outputs.writeAtomically(file, json);
+    }
+
+    private static String shard(SweepPlan p) {
+        return p.shardCount() == 1 ? "no --shard" : "--shard " + p.shardIndex() + "/" + p.shardCount();
     }
 
     /** Reads a folder's plan. */

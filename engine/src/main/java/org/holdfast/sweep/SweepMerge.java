@@ -41,13 +41,13 @@ public final class SweepMerge {
                 first = p;
                 firstDir = d;
             } else {
-                String diff = first.differenceFrom(p);
+                SweepPlan.Difference diff = first.differenceFrom(p);
                 if (diff == null && p.shardCount() != first.shardCount()) {
-                    diff = "--shard .../" + p.shardCount() + " vs .../" + first.shardCount();
+                    diff = new SweepPlan.Difference("--shard I/" + p.shardCount(), "--shard I/" + first.shardCount());
                 }
                 if (diff != null) {
                     throw new ScenarioException(d.toString(), null, "belongs to a different sweep than " + firstDir
-                            + ": " + diff);
+                            + ": it was made with " + diff.other() + ", " + firstDir + " with " + diff.mine());
                 }
             }
             Path earlier = byShard.put(p.shardIndex(), d);

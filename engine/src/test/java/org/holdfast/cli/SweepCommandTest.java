@@ -146,7 +146,8 @@ class SweepCommandTest {
         CommandRunner.Result mixed = CommandRunner.run("sweep-merge", tmp.resolve("s1").toString(),
                 tmp.resolve("s2").toString(), "--out", tmp.resolve("m2").toString());
         assertEquals(Holdfast.EXIT_BAD_INPUT, mixed.exitCode());
-        assertTrue(mixed.err().contains("different sweep") && mixed.err().contains("--seed 43 vs 42"), mixed.err());
+        assertTrue(mixed.err().contains("different sweep") && mixed.err().contains(
+                "it was made with --seed 43, " + tmp.resolve("s1") + " with --seed 42"), mixed.err());
     }
 
     @Test
@@ -172,7 +173,9 @@ class SweepCommandTest {
         CommandRunner.Result r = CommandRunner.run("sweep", scenario.toString(), "--out", tmp.resolve("x").toString(),
                 "--vary", "cosmology.dark_energy.w0=-1.3:-0.9:7", "--samples", "4", "--seed", "42");
         assertEquals(Holdfast.EXIT_BAD_INPUT, r.exitCode());
-        assertTrue(r.err().contains("holds a different sweep"), r.err());
+        assertTrue(r.err().contains("holds a different sweep: the folder was made with --vary cosmology.dark_energy.w0"
+                + " (5 values from -1.3 to -0.9), this command asks for --vary cosmology.dark_energy.w0"
+                + " (7 values from -1.3 to -0.9); choose another folder"), r.err());
     }
 
     @Test
