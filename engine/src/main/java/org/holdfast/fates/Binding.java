@@ -21,8 +21,6 @@ import org.holdfast.units.Units;
  */
 public final class Binding {
 
-    private static final BrentSolver SOLVER = new BrentSolver(1e-12, 1e-14);
-
     private Binding() {
     }
 
@@ -93,6 +91,8 @@ public final class Binding {
             return Double.NaN;
         }
         // f(zeroGravity) = -L^2 < 0, so the larger root lies in (r*, zeroGravity).
-        return SOLVER.solve(200, r -> gm * r - k * r * r * r * r - l2, rStar, zeroGravity);
+        // A solver per call: Commons Math solvers keep the function and the bracket in fields, so
+        // one shared by a sweep's worker threads mixes their problems up.
+        return new BrentSolver(1e-12, 1e-14).solve(200, r -> gm * r - k * r * r * r * r - l2, rStar, zeroGravity);
     }
 }

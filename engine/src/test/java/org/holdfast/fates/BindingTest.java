@@ -70,4 +70,43 @@ class BindingTest {
         double l2 = 1.01 * (gm * rStar - K_LAMBDA * Math.pow(rStar, 4));
         assertTrue(Double.isNaN(Binding.barrierRadius(gm, K_LAMBDA, l2)));
     }
+
+    @Test
+    void barrierRadiiFoundOnManyThreadsAtOnceAreTheOnesFoundOnOne() throws Exception {
+        // A sweep tests binding on all its worker threads at once; each answer must be its own.
+        double gm = Units.G * M;
+        int n = 4000;
+        double[] l2 = new double[n];
+        double[] expected = new double[n];
+        for (int i = 0; i < n; i++) {
+            l2[i] = Math.pow(300 * (20.0 + 0.04 * i), 2);
+            expected[i] = Binding.barrierRadius(gm, K_LAMBDA, l2[i]);
+        }
+        int threads = 4;
+        java.util.concurrent.ExecutorService pool = java.util.concurrent.Executors.newFixedThreadPool(threads);
+        try {
+            java.util.List<java.util.concurrent.Future<Integer>> wrong = new java.util.ArrayList<>();
+            for (int t = 0; t < threads; t++) {
+                int offset = t;
+                wrong.add(pool.submit(() -> {
+                    int bad = 0;
+                    for (int rep = 0; rep < 20; rep++) {
+                        for (int j = 0; j < n; j++) {
+                            int i = (j + offset * 997) % n;
+                            double r = Binding.barrierRadius(gm, K_LAMBDA, l2[i]);
+                            if (Double.doubleToLongBits(r) != Double.doubleToLongBits(expected[i])) {
+                                bad++;
+                            }
+                        }
+                    }
+                    return bad;
+                }));
+            }
+            for (var f : wrong) {
+                assertEquals(0, f.get(), "answers that differ from the one-thread answer");
+            }
+        } finally {
+            pool.shutdownNow();
+        }
+    }
 }
