@@ -121,7 +121,7 @@ public final class EvolveCommand implements Callable<Integer> {
         o.printf(Locale.ROOT, "energy budget closes to %.2e (largest relative residual)%n%n",
                 r.result().maxEnergyResidual());
         o.println("What becomes of each member:");
-        o.print(FateReport.table(r.members()));
+        o.print(FateReport.table(r.members(), r.verdict()));
         o.println();
         o.println(FateReport.verdict(r.verdict(), r.boundUntilGyr()));
         o.println();
