@@ -113,7 +113,7 @@ public final class RunFolder {
     }
 
     /** A file-system failure in plain words. */
-    static String reason(IOException e) {
+    public static String reason(IOException e) {
         if (e instanceof AccessDeniedException) {
             return "permission denied";
         }
