@@ -44,7 +44,7 @@ import picocli.CommandLine.Model.CommandSpec;
             "one or two varied keys. A stopped sweep resumes: run the same command again.",
             "",
             "Example:",
-            "  holdfast sweep scenarios/pair.toml \\",
+            "  holdfast sweep scenarios/observed-ossel-group.toml \\",
             "      --vary cosmology.dark_energy.w0=-1.6:-1.0:13 \\",
             "      --samples 50 --seed 7 --until 60 --out w-sweep"
         })

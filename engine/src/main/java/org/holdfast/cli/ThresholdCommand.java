@@ -47,9 +47,9 @@ import picocli.CommandLine.Model.CommandSpec;
             "with --samples N, on the fraction of N realisations (at one half).",
             "",
             "Example:",
-            "  holdfast threshold scenarios/pair.toml \\",
+            "  holdfast threshold scenarios/tethered-pair.toml \\",
             "      --vary cosmology.dark_energy.w0=-2.0:-1.0 \\",
-            "      --member Tessaly --fate ripped --within-gyr 80 --tolerance 0.001"
+            "      --member Wrenna --fate ripped --within-gyr 60 --tolerance 0.001"
         })
 public final class ThresholdCommand implements Callable<Integer> {
 
