@@ -10,6 +10,7 @@ import java.util.TreeMap;
 
 import com.fasterxml.jackson.databind.SerializationFeature;
 
+import org.holdfast.output.RunFolder;
 import org.holdfast.scenario.ScenarioException;
 
 /**
@@ -74,10 +75,10 @@ public final class SweepMerge {
             throw new ScenarioException("sweep-merge", null, "missing shard(s) " + missing + " of " + first.shardCount());
         }
         SweepPlan whole = first.withShard(1, 1);
-        Files.createDirectories(out);
         if (Files.exists(out.resolve(Sweep.PLAN_FILE)) || Files.exists(out.resolve(Journal.FILE))) {
             throw new ScenarioException("--out", out.toString(), "already holds a sweep; choose an empty folder");
         }
+        RunFolder.makeFolder(out, "--out");
         ResultsTable.sorted(all);
         Journal.writeAll(out, all);
         Outputs.writeAtomically(out.resolve(Sweep.PLAN_FILE),

@@ -259,6 +259,9 @@ class SweepCommandTest {
         Files.writeString(blocker, "not a folder");
         assertBadInput("--out: cannot create the folder " + blocker.resolve("s") + ": ", "sweep", scenario.toString(),
                 "--out", blocker.resolve("s").toString(), "--vary", "cosmology.dark_energy.w0=-1.2,-1");
+        assertEquals(0, sweep("whole").exitCode());
+        assertBadInput("--out: cannot create the folder " + blocker.resolve("m") + ": ", "sweep-merge",
+                tmp.resolve("whole").toString(), "--out", blocker.resolve("m").toString());
     }
 
     @Test
