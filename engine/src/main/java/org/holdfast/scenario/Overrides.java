@@ -39,18 +39,23 @@ public final class Overrides {
             if (eq <= 0) {
                 throw new ScenarioException(OPTION, a, "expected KEY=VALUE");
             }
-            o.put(a.substring(0, eq).trim(), a.substring(eq + 1).trim());
+            o.put(a.substring(0, eq).trim(), a.substring(eq + 1).trim(), OPTION);
         }
         return o;
     }
 
-    /** Adds or replaces one override given with {@code --set}. */
+    /**
+     * Adds or replaces one override that no option of the user's gave (a program's own
+     * setting): a problem with its value is reported at the key's place in the file.
+     */
     public Overrides put(String dottedKey, String value) {
-        return put(dottedKey, value, OPTION);
+        values.put(dottedKey, value);
+        options.remove(dottedKey);
+        return this;
     }
 
     /**
-     * Adds or replaces one override.
+     * Adds or replaces one override that the user gave with an option.
      *
      * @param option the option it came from ("--set", "--vary"), named in error messages
      */
@@ -68,7 +73,7 @@ public final class Overrides {
         return o;
     }
 
-    /** The option an override came from ("--set" for a key with no override). */
+    /** The option an override came from ("--set" when none was recorded). */
     public String optionOf(String dottedKey) {
         return options.getOrDefault(dottedKey, OPTION);
     }
@@ -79,13 +84,13 @@ public final class Overrides {
      * value was used.
      */
     String sourceOf(String dottedKey) {
-        if (used.contains(dottedKey)) {
-            return optionOf(dottedKey);
+        if (used.contains(dottedKey) && options.containsKey(dottedKey)) {
+            return options.get(dottedKey);
         }
         for (String k : used) {
-            if (k.length() > dottedKey.length() + 1 && k.startsWith(dottedKey + ".")
+            if (k.length() > dottedKey.length() + 1 && k.startsWith(dottedKey + ".") && options.containsKey(k)
                     && k.substring(dottedKey.length() + 1).chars().allMatch(Character::isDigit)) {
-                return optionOf(k);
+                return options.get(k);
             }
         }
         return null;

@@ -52,7 +52,7 @@ public final class ValueCheck {
 
     private static Overrides withSet(Map<String, String> set) {
         Overrides o = Overrides.none();
-        set.forEach(o::put);
+        set.forEach((k, v) -> o.put(k, v, Overrides.OPTION));
         return o;
     }
 }
