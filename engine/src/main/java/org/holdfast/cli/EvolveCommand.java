@@ -14,9 +14,11 @@ import org.holdfast.fates.FateRun;
 import org.holdfast.output.RunFolder;
 import org.holdfast.output.RunPlots;
 import org.holdfast.output.RunWriter;
+import org.holdfast.run.NewtonianLimitWatch;
 import org.holdfast.run.RunObserver;
 import org.holdfast.run.Simulation;
 import org.holdfast.scenario.Scenario;
+import org.holdfast.units.Units;
 
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -60,6 +62,12 @@ public final class EvolveCommand implements Callable<Integer> {
         Scenario s = scenario.read(until == null ? Double.NaN : until);
         Path dirPath = RunFolder.choose(out, s.file());
         Simulation sim = FateRun.build(s, 0);
+        try {
+            RunFolder.makeFolder(dirPath, "--out");
+        } catch (RuntimeException e) {
+            sim.close();
+            throw e;
+        }
         PrintWriter o = spec.commandLine().getOut();
         if (!quiet) {
             o.printf(Locale.ROOT, "evolving \"%s\": %d galaxies, %,d tracers, %s to %s (Gyr from today)%n",
@@ -103,19 +111,23 @@ public final class EvolveCommand implements Callable<Integer> {
             }
         }
         if (!quiet) {
-            report(o, s, r, writer.dir());
+            report(o, r, writer.dir(), newtonianLimitLine(writer.newtonianLimit()));
         }
         r.simulation().close();
         return 0;
     }
 
-    private static void report(PrintWriter o, Scenario s, FateRun.Outcome r, Path dir) {
+    private static void report(PrintWriter o, FateRun.Outcome r, Path dir, String limitLine) {
         o.printf(Locale.ROOT, "%nstopped at t = %s Gyr after %,d steps in %.1f s: %s%n", fmt(r.result().endGyr()),
                 r.result().steps(), r.result().wallSeconds(), r.result().reason().message());
-        o.printf(Locale.ROOT, "energy budget closes to %.2e (largest relative residual)%n%n",
+        o.printf(Locale.ROOT, "energy budget closes to %.2e (largest relative residual)%n",
                 r.result().maxEnergyResidual());
+        if (limitLine != null) {
+            o.println(limitLine);
+        }
+        o.println();
         o.println("What becomes of each member:");
-        o.print(FateReport.table(r.members()));
+        o.print(FateReport.table(r.members(), r.verdict()));
         o.println();
         o.println(FateReport.verdict(r.verdict(), r.boundUntilGyr()));
         o.println();
@@ -130,6 +142,17 @@ public final class EvolveCommand implements Callable<Integer> {
         }
         o.println("Run folder: " + dir + " (" + String.join(", ", files) + ")");
         o.flush();
+    }
+
+    /** One line when a member went faster than the Newtonian limit; null when none did. */
+    static String newtonianLimitLine(NewtonianLimitWatch w) {
+        if (Double.isNaN(w.passedGyr())) {
+            return null;
+        }
+        return String.format(Locale.ROOT, "Note: %s moved faster than %.1f c relative to the centre of mass from"
+                + " t = %s Gyr (%.3g km/s then); from that time on this Newtonian model is doubtful"
+                + " (summary.json: newtonian_limit_passed_gyr).", w.member(), Units.NEWTONIAN_LIMIT_FRACTION_OF_C,
+                fmt(w.passedGyr()), w.speedKpcPerGyr() * Units.KPC_PER_GYR_TO_KMS);
     }
 
     private static String fmt(double t) {

@@ -44,7 +44,7 @@ import picocli.CommandLine.Spec;
             "The cosmology comes from the [cosmology] table of a scenario file, or from options.",
             "",
             "Examples:",
-            "  holdfast expansion scenarios/lambda-today.toml",
+            "  holdfast expansion scenarios/lambda-steady.toml",
             "  holdfast expansion --h0 70 --omega-m 0.3 --w0 -1.5 --at 0,10,20 --json",
             "  holdfast expansion scenarios/phantom-tide.toml --plot phantom.png"
         })

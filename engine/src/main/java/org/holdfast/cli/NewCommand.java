@@ -8,6 +8,7 @@ import java.nio.file.StandardCopyOption;
 import java.util.List;
 import java.util.concurrent.Callable;
 
+import org.holdfast.output.RunFolder;
 import org.holdfast.scenario.ScenarioException;
 import org.holdfast.scenario.generate.GroupGenerator;
 import org.holdfast.scenario.generate.GroupRecipe;
@@ -24,7 +25,8 @@ import picocli.CommandLine.Model.CommandSpec;
         header = "Write a scenario of a random, plausible group.",
         description = {
             "Writes a scenario of a random group with invented names: masses from a",
-            "power-law mass function, places uniform in a sphere, velocities scaled to",
+            "power-law mass function, places uniform in a sphere (then centred on the",
+            "centre of mass, drawn in if that moved a member outside), velocities scaled to",
             "the virial ratio 2T/|W| asked for (point masses), NFW halos from a",
             "mass-concentration relation, Planck 2018 cosmology.",
             "",
@@ -47,7 +49,7 @@ public final class NewCommand implements Callable<Integer> {
     double massMsun;
 
     @Option(names = "--radius-kpc", paramLabel = "R", defaultValue = "500",
-            description = "Members lie inside a sphere of this radius (default: ${DEFAULT-VALUE}).")
+            description = "Members lie inside a sphere of this radius around their centre of mass (default: ${DEFAULT-VALUE}).")
     double radiusKpc;
 
     @Option(names = "--virial-ratio", paramLabel = "Q", defaultValue = "1",
@@ -99,10 +101,17 @@ public final class NewCommand implements Callable<Integer> {
             stdout.print(text);
         } else {
             Path abs = out.toAbsolutePath();
-            Files.createDirectories(abs.getParent());
+            Path parent = out.getParent() != null ? out.getParent() : abs.getParent();
+            Path created = RunFolder.makeFolder(parent, "--out");
             Path tmp = abs.resolveSibling(abs.getFileName() + ".tmp");
-            Files.writeString(tmp, text, StandardCharsets.UTF_8);
-            Files.move(tmp, abs, StandardCopyOption.REPLACE_EXISTING);
+            try {
+                Files.writeString(tmp, text, StandardCharsets.UTF_8);
+                Files.move(tmp, abs, StandardCopyOption.REPLACE_EXISTING);
+            } catch (java.io.IOException e) {
+                Files.deleteIfExists(tmp);
+                RunFolder.removeCreated(parent, created);
+                throw new ScenarioException("--out", null, "cannot write " + out + ": " + RunFolder.reason(e));
+            }
             stdout.println("new: wrote " + out + " (" + members.size() + " members)");
         }
         stdout.flush();

@@ -50,10 +50,14 @@ public final class ScenarioOptions {
         return ScenarioReader.read(file, overrides(), numbers(), untilGyr);
     }
 
-    /** One line on how uncertain numbers were used, or null when there were none. */
+    /**
+     * One line on how uncertain numbers were used; when there were none, a line saying that
+     * --sample changes nothing if it was given, otherwise null.
+     */
     String uncertainNote(Scenario s) {
         if (s.uncertain().isEmpty()) {
-            return null;
+            return sample == null ? null
+                    : "the scenario has no uncertain numbers, so --sample " + sample + " changes nothing";
         }
         return (sample == null ? "used the central value of " : "used draw " + sample + " (seed " + seed + ") of ")
                 + s.uncertain().size() + " uncertain number" + (s.uncertain().size() == 1 ? "" : "s");

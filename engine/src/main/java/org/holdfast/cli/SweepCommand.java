@@ -24,6 +24,7 @@ import org.holdfast.sweep.Sweep;
 import org.holdfast.sweep.SweepEngine;
 import org.holdfast.sweep.SweepPlan;
 import org.holdfast.sweep.SweepProgress;
+import org.holdfast.sweep.ValueCheck;
 
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
@@ -43,7 +44,7 @@ import picocli.CommandLine.Model.CommandSpec;
             "one or two varied keys. A stopped sweep resumes: run the same command again.",
             "",
             "Example:",
-            "  holdfast sweep scenarios/pair.toml \\",
+            "  holdfast sweep scenarios/observed-ossel-group.toml \\",
             "      --vary cosmology.dark_energy.w0=-1.6:-1.0:13 \\",
             "      --samples 50 --seed 7 --until 60 --out w-sweep"
         })
@@ -169,6 +170,7 @@ public final class SweepCommand implements Callable<Integer> {
             throw new ScenarioException("--yes", null, "the sweep has " + runs + " runs (more than " + CONFIRM_ABOVE_RUNS
                     + "); add --yes if you mean it");
         }
+        ValueCheck.readAtEveryValue(scenario, fixed.asMap(), axes, untilGyr == null ? Double.NaN : untilGyr);
         return plan;
     }
 

@@ -14,6 +14,7 @@ import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.SerializationFeature;
 
 import org.holdfast.scenario.Overrides;
+import org.holdfast.scenario.Scenario;
 import org.holdfast.scenario.ScenarioException;
 import org.holdfast.sweep.Axis;
 import org.holdfast.sweep.KeyCheck;
@@ -26,6 +27,7 @@ import org.holdfast.sweep.RunSpec;
 import org.holdfast.sweep.RunTask;
 import org.holdfast.sweep.SeedPlan;
 import org.holdfast.sweep.Threshold;
+import org.holdfast.sweep.ValueCheck;
 
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
@@ -45,9 +47,9 @@ import picocli.CommandLine.Model.CommandSpec;
             "with --samples N, on the fraction of N realisations (at one half).",
             "",
             "Example:",
-            "  holdfast threshold scenarios/pair.toml \\",
+            "  holdfast threshold scenarios/tethered-pair.toml \\",
             "      --vary cosmology.dark_energy.w0=-2.0:-1.0 \\",
-            "      --member Tessaly --fate ripped --within-gyr 80 --tolerance 0.001"
+            "      --member Wrenna --fate ripped --within-gyr 60 --tolerance 0.001"
         })
 public final class ThresholdCommand implements Callable<Integer> {
 
@@ -126,6 +128,21 @@ public final class ThresholdCommand implements Callable<Integer> {
         if (samples != null && samples < 1) {
             throw new ScenarioException("--samples", null, "must be at least 1 (got " + samples + ")");
         }
+        if (withinGyr != null && !Double.isFinite(withinGyr)) {
+            throw new ScenarioException("--within-gyr", null, "must be a finite number of Gyr");
+        }
+        // Read with the scenario's own end, so that --within-gyr is judged here and not blamed on until_gyr.
+        Scenario atLow = ValueCheck.readAtEveryValue(scenario, Overrides.parse(set).asMap(), List.of(ends), Double.NaN);
+        double start = atLow.run().startGyr();
+        if (withinGyr != null && !(withinGyr > start)) {
+            throw new ScenarioException("--within-gyr", null, String.format(Locale.ROOT,
+                    "must be later than the runs' start (%.4g Gyr from today), since fates are decided forward"
+                            + " in time (got %.4g)", start, withinGyr));
+        }
+        List<String> names = atLow.group().galaxies().stream().map(g -> g.name()).toList();
+        if (member != null && !names.contains(member)) {
+            throw new ScenarioException("--member", member, "no such member; the scenario has " + String.join(", ", names));
+        }
         int n = samples == null ? 1 : samples;
         Evaluator eval = new Evaluator(key, n);
         Threshold.Result r;
@@ -166,7 +183,7 @@ public final class ThresholdCommand implements Callable<Integer> {
             o.put(key, Axis.format(x));
             List<RunTask> tasks = new ArrayList<>();
             for (int s = 0; s < seeds.length; s++) {
-                tasks.add(new RunTask(s, 0, s, seeds[s], o));
+                tasks.add(new RunTask(s, 0, s, seeds[s], o, List.of(key)));
             }
             int[] hits = {0};
             try {

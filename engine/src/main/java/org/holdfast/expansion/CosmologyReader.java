@@ -76,7 +76,7 @@ public final class CosmologyReader {
         if (p != null && (p.equals("w0") || p.equals("wa")) && cosmology.table("dark_energy") != null) {
             return cosmology.table("dark_energy").error(p, e.getMessage());
         }
-        if (p != null && cosmology.hasInFile(p)) {
+        if (p != null && cosmology.has(p)) {
             return cosmology.error(p, e.getMessage());
         }
         return cosmology.error(null, e.getMessage());

@@ -4,6 +4,7 @@ import java.awt.BasicStroke;
 import java.awt.Color;
 import java.awt.Font;
 import java.awt.Graphics2D;
+import java.awt.font.FontRenderContext;
 import java.awt.image.BufferedImage;
 import java.io.IOException;
 import java.nio.file.Files;
@@ -14,6 +15,8 @@ import java.util.List;
 
 import javax.imageio.ImageIO;
 
+import org.knowm.xchart.AnnotationLine;
+import org.knowm.xchart.AnnotationText;
 import org.knowm.xchart.BitmapEncoder;
 import org.knowm.xchart.XYChart;
 import org.knowm.xchart.XYChartBuilder;
@@ -29,6 +32,9 @@ public final class ExpansionPlot {
     private static final Color GRID = new Color(0xE3, 0xE7, 0xEB);
     private static final int WIDTH = 900;
     private static final int HEIGHT = 420;
+    /** About the width of the plot area inside a chart WIDTH wide (axis labels and margins off). */
+    private static final double PLOT_WIDTH_PX = WIDTH - 95;
+    private static final Font LABEL = new Font(Font.SANS_SERIF, Font.PLAIN, 13);
 
     private ExpansionPlot() {
     }
@@ -74,12 +80,52 @@ public final class ExpansionPlot {
         XYChart chart = style(new XYChartBuilder().width(WIDTH).height(HEIGHT).title(title)
                 .xAxisTitle("time t [Gyr from today]").yAxisTitle("scale factor a (1 today, log scale)").build());
         chart.getStyler().setYAxisLogarithmic(true);
-        chart.getStyler().setXAxisDecimalPattern("0.#");
+        // Round ends, so that the ticks fall on round times and one of them on today.
+        double step = tickStep(hi - lo);
+        chart.getStyler().setXAxisMin(Math.floor(lo / step) * step);
+        chart.getStyler().setXAxisMax(Math.ceil(hi / step) * step);
+        chart.getStyler().setXAxisDecimalPattern(step < 1 ? "0.#" : "0");
         XYSeries s = chart.addSeries("a(t)", x, y);
         s.setLineColor(CURVE);
         s.setLineStyle(new BasicStroke(2.5f));
         s.setMarker(SeriesMarkers.NONE);
+        double top = y.stream().mapToDouble(Double::doubleValue).max().orElse(1);
+        double bottom = y.stream().mapToDouble(Double::doubleValue).min().orElse(1);
+        double labelA = Math.pow(10, Math.log10(bottom) + 0.92 * (Math.log10(top) - Math.log10(bottom)));
+        double gyrPerPixel = (chart.getStyler().getXAxisMax() - chart.getStyler().getXAxisMin()) / PLOT_WIDTH_PX;
+        mark(chart, 0.0, "today", labelA, gyrPerPixel, true);
+        if (t.ripGyr().isPresent()) {
+            mark(chart, t.ripGyr().getAsDouble(), String.format(java.util.Locale.ROOT,
+                    "big rip, %.1f Gyr from today", t.ripGyr().getAsDouble()), labelA, gyrPerPixel, false);
+        }
+        if (t.crunchGyr().isPresent()) {
+            mark(chart, t.crunchGyr().getAsDouble(), String.format(java.util.Locale.ROOT,
+                    "big crunch, %.1f Gyr from today", t.crunchGyr().getAsDouble()), labelA, gyrPerPixel, false);
+        }
         return chart;
+    }
+
+    /**
+     * A vertical line at time t with a label beside it (XChart centres a label on its point, so
+     * the point is moved by half the label's width, in time units, off the line).
+     */
+    private static void mark(XYChart chart, double t, String label, double labelA, double gyrPerPixel, boolean right) {
+        chart.addAnnotation(new AnnotationLine(t, true, false));
+        double halfWidthPx = LABEL.getStringBounds(label, new FontRenderContext(null, true, true)).getWidth() / 2 + 6;
+        double x = t + (right ? 1 : -1) * halfWidthPx * gyrPerPixel;
+        chart.addAnnotation(new AnnotationText(label, x, labelA, false));
+    }
+
+    /** A round tick spacing (1, 2 or 5 times a power of ten) giving at most ten ticks over the span. */
+    static double tickStep(double span) {
+        double raw = span / 10;
+        double p = Math.pow(10, Math.floor(Math.log10(raw)));
+        for (double m : new double[] {1, 2, 5, 10}) {
+            if (m * p >= raw) {
+                return m * p;
+            }
+        }
+        return 10 * p;
     }
 
     private static XYChart eosChart(ExpansionTable t) {
@@ -124,6 +170,9 @@ public final class ExpansionPlot {
         st.setAxisTitleFont(new Font(Font.SANS_SERIF, Font.PLAIN, 14));
         st.setAxisTickLabelsFont(new Font(Font.SANS_SERIF, Font.PLAIN, 12));
         st.setChartTitleBoxVisible(false);
+        st.setAnnotationTextFont(LABEL);
+        st.setAnnotationTextFontColor(INK);
+        st.setAnnotationLineColor(new Color(0x8A, 0x94, 0x9E));
         return chart;
     }
 }

@@ -90,8 +90,9 @@ public final class Binding {
         if (fStar <= 0) {
             return Double.NaN;
         }
-        // f(zeroGravity) = -L^2 < 0, so the larger root lies in (r*, zeroGravity). A solver keeps
-        // state between calls, so each call has its own: sweeps test binding on many threads.
+        // f(zeroGravity) = -L^2 < 0, so the larger root lies in (r*, zeroGravity).
+        // A solver per call: Commons Math solvers keep the function and the bracket in fields, so
+        // one shared by a sweep's worker threads mixes their problems up.
         return new BrentSolver(1e-12, 1e-14).solve(200, r -> gm * r - k * r * r * r * r - l2, rStar, zeroGravity);
     }
 }

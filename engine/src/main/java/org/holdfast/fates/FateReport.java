@@ -12,6 +12,9 @@ import org.holdfast.run.RunEvent;
  */
 public final class FateReport {
 
+    /** The member a dissolved group ends with: the tracker's "main group", one body, nothing bound to it. */
+    static final String LEFT_ALONE = "is what is left of the group, alone: no other member stays bound to it";
+
     private FateReport() {
     }
 
@@ -29,15 +32,24 @@ public final class FateReport {
         return tGyr > 0 ? "in " + span : span + " ago";
     }
 
-    /** The fate table: one line per member. */
+    /** The fate table: one line per member, for a group that has not come apart. */
     public static String table(List<MemberFate> fates) {
+        return table(fates, Verdict.BOUND);
+    }
+
+    /**
+     * The fate table: one line per member. When the group came apart ({@link Verdict#DISSOLVED})
+     * the member its "main group" ends with is alone, so it is not said to stay bound to a group.
+     */
+    public static String table(List<MemberFate> fates, Verdict verdict) {
         int width = 4;
         for (MemberFate f : fates) {
             width = Math.max(width, f.name().length());
         }
         StringBuilder sb = new StringBuilder();
         for (MemberFate f : fates) {
-            sb.append(String.format(Locale.ROOT, "  %-" + width + "s  %s%n", f.name(), sentence(f)));
+            String what = f.fate() == MemberFate.Fate.BOUND && verdict == Verdict.DISSOLVED ? LEFT_ALONE : sentence(f);
+            sb.append(String.format(Locale.ROOT, "  %-" + width + "s  %s%n", f.name(), what));
         }
         return sb.toString();
     }

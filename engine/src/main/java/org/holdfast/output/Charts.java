@@ -56,6 +56,96 @@ public final class Charts {
         return chart;
     }
 
+    /**
+     * Readable tick labels on the linear axes ({@link #tickLabel}); a logarithmic axis keeps
+     * XChart's own labels, which sit on its powers of ten. Called when a chart is saved, once
+     * its axes are settled.
+     */
+    static void labelTicks(XYChart chart) {
+        var s = chart.getStyler();
+        s.setxAxisTickLabelsFormattingFunction(s.isXAxisLogarithmic() ? null : Charts::tickLabel);
+        s.setyAxisTickLabelsFormattingFunction(s.isYAxisLogarithmic() ? null : Charts::tickLabel);
+    }
+
+    /**
+     * A tick label a reader can take in at a glance: plain digits with thousands separators up
+     * to 10^5 (at most three decimals), a power of ten beyond, "1.9 x 10^14" written with a
+     * superscript exponent.
+     */
+    public static String tickLabel(double v) {
+        double a = Math.abs(v);
+        if (a == 0) {
+            return "0";
+        }
+        if (a < 1e5 && a >= 1e-3) {
+            java.text.DecimalFormat f = new java.text.DecimalFormat("#,##0.###",
+                    java.text.DecimalFormatSymbols.getInstance(java.util.Locale.ROOT));
+            return f.format(v);
+        }
+        int e = (int) Math.floor(Math.log10(a));
+        double m = v / Math.pow(10, e);
+        if (Math.abs(m) >= 9.95) {
+            m /= 10;
+            e++;
+        }
+        String mantissa = String.format(java.util.Locale.ROOT, "%.1f", m).replace(".0", "");
+        return (mantissa.equals("1") ? "" : mantissa.equals("-1") ? "-" : mantissa + "\u00d7") + "10" + superscript(e);
+    }
+
+    private static String superscript(int e) {
+        String digits = "\u2070\u00b9\u00b2\u00b3\u2074\u2075\u2076\u2077\u2078\u2079";
+        StringBuilder sb = new StringBuilder();
+        for (char c : Integer.toString(e).toCharArray()) {
+            sb.append(c == '-' ? '\u207b' : digits.charAt(c - '0'));
+        }
+        return sb.toString();
+    }
+
+    /**
+     * Thins a series that is to be drawn dashed. XChart draws a series segment by segment and
+     * starts the dash pattern again on each, so a curve of many short segments comes out solid
+     * while its legend shows dashes; keeping only points at least {@code minPx} apart on the
+     * screen (a whole dash and gap) makes the line dashed as well. NaN (a gap) is kept.
+     *
+     * @param xSpan the x axis range shown, in data units
+     * @param yLo the lower end of the y axis shown (> 0 on a log axis)
+     * @param yHi the upper end
+     * @param plotW the plot area's width in pixels (about)
+     * @param plotH its height
+     * @return {x, y}
+     */
+    public static double[][] thinForDashes(double[] x, double[] y, double xSpan, double yLo, double yHi, boolean logY,
+            double plotW, double plotH, double minPx) {
+        double ySpan = logY ? Math.log10(yHi) - Math.log10(yLo) : yHi - yLo;
+        java.util.List<double[]> kept = new java.util.ArrayList<>();
+        double lastPx = Double.NaN;
+        double lastPy = Double.NaN;
+        for (int i = 0; i < x.length; i++) {
+            if (!Double.isFinite(y[i])) {
+                kept.add(new double[] {x[i], Double.NaN});
+                lastPx = Double.NaN;
+                continue;
+            }
+            double px = x[i] / xSpan * plotW;
+            double py = (logY ? Math.log10(y[i]) : y[i]) / ySpan * plotH;
+            boolean last = i == x.length - 1 || !Double.isFinite(y[i + 1]);
+            if (Double.isNaN(lastPx) || Math.hypot(px - lastPx, py - lastPy) >= minPx || last) {
+                kept.add(new double[] {x[i], y[i]});
+                lastPx = px;
+                lastPy = py;
+            }
+        }
+        double[][] out = new double[2][kept.size()];
+        for (int i = 0; i < kept.size(); i++) {
+            out[0][i] = kept.get(i)[0];
+            out[1][i] = kept.get(i)[1];
+        }
+        return out;
+    }
+
+    /** The length of one dash and gap of the dashed strokes, in pixels. */
+    public static final float DASH_PERIOD_PX = 12f;
+
     /** Adds a solid line in member colour i. */
     public static XYSeries line(XYChart chart, String name, double[] x, double[] y, int colour) {
         XYSeries s = chart.addSeries(name, x, y);
@@ -91,6 +181,7 @@ public final class Charts {
         int h = 0;
         java.awt.image.BufferedImage[] parts = new java.awt.image.BufferedImage[charts.length];
         for (int i = 0; i < charts.length; i++) {
+            labelTicks(charts[i]);
             parts[i] = BitmapEncoder.getBufferedImage(charts[i]);
             w += parts[i].getWidth();
             h = Math.max(h, parts[i].getHeight());
@@ -121,6 +212,7 @@ public final class Charts {
         Path dir = file.toAbsolutePath().getParent();
         String stem = file.getFileName().toString().replaceFirst("\\.png$", "");
         Path part = dir.resolve(stem + ".part.png");
+        labelTicks(chart);
         try {
             Files.createDirectories(dir);
             BitmapEncoder.saveBitmap(chart, dir.resolve(stem + ".part").toString(), BitmapFormat.PNG);

@@ -2,7 +2,11 @@ package org.holdfast.output;
 
 import java.io.IOException;
 import java.io.UncheckedIOException;
+import java.nio.file.AccessDeniedException;
+import java.nio.file.FileAlreadyExistsException;
+import java.nio.file.FileSystemException;
 import java.nio.file.Files;
+import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
 import java.util.Map;
@@ -60,6 +64,69 @@ public final class RunFolder {
             p = Path.of(stem + "-run-" + i);
         }
         return p;
+    }
+
+    /**
+     * Creates an output folder the user named (or that was named for them) before anything is
+     * announced or written, so that a folder that cannot be made is reported as bad input: one
+     * line naming the option and the reason.
+     *
+     * @param option the option that names the folder ("--out"), for the message
+     * @return the topmost folder this call created (the folder itself or a parent), for
+     *     {@link #removeCreated}; null when the folder was already there
+     * @throws ScenarioException if the folder cannot be made
+     */
+    public static Path makeFolder(Path dir, String option) {
+        Path abs = dir.toAbsolutePath().normalize();
+        Path top = null;
+        for (Path p = abs; p != null && !Files.exists(p); p = p.getParent()) {
+            top = p;
+        }
+        try {
+            Files.createDirectories(abs);
+        } catch (IOException e) {
+            removeCreated(abs, top);
+            throw new ScenarioException(option, null, "cannot create the folder " + dir + ": " + reason(e));
+        }
+        if (!Files.isWritable(abs)) {
+            throw new ScenarioException(option, null, "cannot write in the folder " + dir + ": permission denied");
+        }
+        return top;
+    }
+
+    /**
+     * Removes the folders {@link #makeFolder} created, from {@code dir} up to {@code top}, each
+     * only if it is empty; does nothing when {@code top} is null.
+     */
+    public static void removeCreated(Path dir, Path top) {
+        if (top == null) {
+            return;
+        }
+        Path stop = top.toAbsolutePath().normalize();
+        for (Path p = dir.toAbsolutePath().normalize(); p != null && p.startsWith(stop); p = p.getParent()) {
+            try {
+                Files.deleteIfExists(p);
+            } catch (IOException e) {
+                return; // not empty (someone else's files), or not ours to remove
+            }
+        }
+    }
+
+    /** A file-system failure in plain words. */
+    public static String reason(IOException e) {
+        if (e instanceof AccessDeniedException) {
+            return "permission denied";
+        }
+        if (e instanceof FileAlreadyExistsException f) {
+            return (f.getFile() == null ? "a file" : f.getFile()) + " is in the way and is not a folder";
+        }
+        if (e instanceof NoSuchFileException) {
+            return "the file system refuses it (no such file or directory)";
+        }
+        if (e instanceof FileSystemException f && f.getReason() != null) {
+            return f.getReason().toLowerCase(java.util.Locale.ROOT);
+        }
+        return String.valueOf(e.getMessage());
     }
 
     /** Creates the folder and copies the scenario file into it. */

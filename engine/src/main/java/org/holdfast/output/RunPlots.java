@@ -24,6 +24,11 @@ public final class RunPlots {
 
     private static final int W = 1100;
     private static final int H = 650;
+    /** About the plot area of a W x H chart with its legend outside (a little less, to be safe). */
+    private static final double PLOT_W = W - 380;
+    private static final double PLOT_H = H - 110;
+    /** Shortest segment of a dashed line: more than one dash and gap. */
+    private static final double DASH_MIN_PX = 1.2 * Charts.DASH_PERIOD_PX;
 
     private RunPlots() {
     }
@@ -59,18 +64,27 @@ public final class RunPlots {
         if (log) {
             c.setYAxisTitle("distance [kpc] (log; under 1 kpc drawn at 1)");
         }
+        double[] zg = rec.zeroGravityKpc();
+        double[] zgShown = capped(zg, 5 * Math.max(max, 1));
+        double yHi = Math.max(max, maxFinite(zgShown));
+        double yLo = log ? Math.min(1.0, Math.max(minFinite(zgShown), 1e-3)) : 0;
+        double tSpan = t.length == 0 ? 1 : Math.max(t[t.length - 1] - t[0], 1e-9);
         for (Map.Entry<String, double[]> e : rec.distancesKpc().entrySet()) {
             double[] d = log ? atLeast(e.getValue(), 1.0) : e.getValue();
-            var series = Charts.line(c, e.getKey(), t, d, colour);
             if (colour >= Palette.size()) {
-                series.setLineStyle(new java.awt.BasicStroke(2.2f, java.awt.BasicStroke.CAP_BUTT,
+                // dashed, so thinned: XChart restarts the dashes on every segment
+                double[][] thin = Charts.thinForDashes(t, d, tSpan, yLo, yHi, log, PLOT_W, PLOT_H, DASH_MIN_PX);
+                Charts.line(c, e.getKey(), thin[0], thin[1], colour).setLineStyle(
+                        new java.awt.BasicStroke(2.2f, java.awt.BasicStroke.CAP_BUTT,
                         java.awt.BasicStroke.JOIN_MITER, 10f, new float[] {9f, 4f}, 0f));
+            } else {
+                Charts.line(c, e.getKey(), t, d, colour);
             }
             colour++;
         }
-        double[] zg = rec.zeroGravityKpc();
         if (hasFinite(zg)) {
-            Charts.guide(c, "zero-gravity radius of the main group", t, capped(zg, 5 * Math.max(max, 1)));
+            double[][] thin = Charts.thinForDashes(t, zgShown, tSpan, yLo, yHi, log, PLOT_W, PLOT_H, DASH_MIN_PX);
+            Charts.guide(c, "zero-gravity radius of the main group", thin[0], thin[1]);
         }
         int row = 0;
         for (RunEvent ev : events) {
@@ -113,9 +127,19 @@ public final class RunPlots {
         Charts.points(c, "members", d.memberR(), d.memberVr(), 5, 6);
         double r0 = zeroVelocityRadius(d.flowR(), d.flowVr());
         if (!Double.isNaN(r0)) {
-            c.addAnnotation(new AnnotationLine(r0, true, false));
-            c.addAnnotation(new AnnotationText(String.format(java.util.Locale.ROOT, "zero-velocity radius %.0f kpc", r0),
-                    r0, 0, false));
+            // a dashed vertical guide named in the legend, so that no label sits on the ticks
+            double lo = Math.min(minFinite(d.flowVr()), minFinite(d.memberVr()));
+            double hi = Math.max(maxFinite(d.flowVr()), maxFinite(d.memberVr()));
+            Charts.guide(c, String.format(java.util.Locale.ROOT, "zero-velocity radius, %.0f kpc", r0),
+                    new double[] {r0, r0}, new double[] {lo, hi});
+        }
+        double vLo = Math.min(minFinite(d.flowVr()), minFinite(d.memberVr()));
+        double vHi = Math.max(maxFinite(d.flowVr()), maxFinite(d.memberVr()));
+        if (Double.isFinite(vLo) && vHi - vLo <= 1e-9 * Math.max(1, Math.abs(vHi))) {
+            // all at one speed (a circular orbit seen from its centre): give the axis a height
+            double pad = Math.max(1.0, 0.1 * Math.abs(vHi));
+            c.getStyler().setYAxisMin(vLo - pad);
+            c.getStyler().setYAxisMax(vHi + pad);
         }
         c.addAnnotation(new AnnotationLine(0, false, false));
         return c;
@@ -146,6 +170,26 @@ public final class RunPlots {
             }
         }
         return Double.isInfinite(firstBeyond) ? Double.NaN : 0.5 * (lastInfall + firstBeyond);
+    }
+
+    private static double maxFinite(double[] a) {
+        double m = Double.NEGATIVE_INFINITY;
+        for (double v : a) {
+            if (Double.isFinite(v) && v > m) {
+                m = v;
+            }
+        }
+        return m;
+    }
+
+    private static double minFinite(double[] a) {
+        double m = Double.POSITIVE_INFINITY;
+        for (double v : a) {
+            if (Double.isFinite(v) && v < m) {
+                m = v;
+            }
+        }
+        return m;
     }
 
     private static double[] atLeast(double[] a, double floor) {

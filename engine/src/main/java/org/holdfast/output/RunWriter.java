@@ -10,6 +10,7 @@ import org.holdfast.fates.FateRun;
 import org.holdfast.fates.FateTracker;
 import org.holdfast.fates.MemberFate;
 import org.holdfast.group.GalaxySpec;
+import org.holdfast.run.NewtonianLimitWatch;
 import org.holdfast.run.RunEvent;
 import org.holdfast.run.RunObserver;
 import org.holdfast.run.RunView;
@@ -29,6 +30,7 @@ public final class RunWriter {
     private final Scenario scenario;
     private final String version;
     private final RunFolder folder;
+    private final NewtonianLimitWatch limit = new NewtonianLimitWatch();
 
     /**
      * Creates the folder (which {@link RunFolder#choose} has checked) with the scenario's copy
@@ -48,6 +50,11 @@ public final class RunWriter {
         return folder.dir();
     }
 
+    /** When a member's speed first passed the Newtonian limit (after {@link #run}). */
+    public NewtonianLimitWatch newtonianLimit() {
+        return limit;
+    }
+
     /**
      * Runs the simulation (built from the scenario) with the fate tracker, the folder's writers
      * and then {@code watchers}, and writes the summary and pictures. A cancelled run is written
@@ -63,6 +70,7 @@ public final class RunWriter {
                 FateRun.analysisIntervalGyr(scenario.run()));
         List<RunObserver> observers = new ArrayList<>();
         observers.add(recorder);
+        observers.add(limit);
         observers.add(new SnapshotWriter(folder.dir(), scenario.name(), version));
         TrackWriter tracks = new TrackWriter(folder.dir());
         observers.add(tracks);
@@ -73,7 +81,7 @@ public final class RunWriter {
         } finally {
             tracks.close();
         }
-        folder.writeJson(RunFolder.SUMMARY, summary(scenario, version, r));
+        folder.writeJson(RunFolder.SUMMARY, summary(scenario, version, r, limit));
         if (!jvmShuttingDown()) {
             // the pictures need AWT, which refuses to start once the JVM is quitting (Ctrl+C)
             RunPlots.write(folder.dir(), recorder, r.events(), scenario.name());
@@ -111,7 +119,8 @@ public final class RunWriter {
         return m;
     }
 
-    private static Map<String, Object> summary(Scenario s, String version, FateRun.Outcome r) {
+    private static Map<String, Object> summary(Scenario s, String version, FateRun.Outcome r,
+            NewtonianLimitWatch limit) {
         RunView v = r.simulation();
         Map<String, Object> m = new LinkedHashMap<>();
         m.put("scenario", s.name());
@@ -130,6 +139,10 @@ public final class RunWriter {
         m.put("run", Provenance.run(s.run()));
         m.put("verdict", r.verdict().key());
         m.put("bound_until_gyr", Provenance.finiteOrNull(r.boundUntilGyr()));
+        // when a member's speed relative to the centre of mass first passed 0.1 c (null: never)
+        m.put("newtonian_limit_passed_gyr", Provenance.finiteOrNull(limit.passedGyr()));
+        m.put("newtonian_limit_member", limit.member());
+        m.put("newtonian_limit_kms", Units.NEWTONIAN_LIMIT_FRACTION_OF_C * Units.C_KMS);
         List<Map<String, Object>> members = new ArrayList<>();
         for (MemberFate f : r.members()) {
             Map<String, Object> e = new LinkedHashMap<>();

@@ -3,6 +3,7 @@ package org.holdfast.scenario;
 import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.List;
+import java.util.Locale;
 import java.util.Map;
 
 import org.holdfast.group.FlowSpec;
@@ -15,6 +16,7 @@ import org.holdfast.observe.MemberState;
 import org.holdfast.observe.ObservedReader;
 import org.holdfast.observe.Observer;
 import org.holdfast.observe.ObserverReader;
+import org.holdfast.units.Units;
 
 /**
  * Reads the members ({@code [[galaxy]]}) and the flow tracers ({@code [flow]}) of a scenario.
@@ -71,6 +73,7 @@ public final class GroupReader {
             } else {
                 spec = galaxy(g, null, null);
             }
+            checkSpeed(g, spec, warnings);
             Node earlier = byName.put(spec.name(), g);
             if (earlier != null) {
                 throw g.error("name", "duplicate galaxy name '" + spec.name() + "' (first used at line "
@@ -93,6 +96,39 @@ public final class GroupReader {
                     + MAX_TRACERS + " one run can hold");
         }
         return group;
+    }
+
+    /**
+     * A member's speed as given must be below c; above {@link Units#NEWTONIAN_LIMIT_FRACTION_OF_C}
+     * of c the run is allowed, with a warning, since the Newtonian model is doubtful there.
+     */
+    static void checkSpeed(Node g, GalaxySpec spec, List<String> warnings) {
+        double[] v = spec.velocityKms();
+        double speed = Math.sqrt(v[0] * v[0] + v[1] * v[1] + v[2] * v[2]);
+        String key = g.hasInFile("observed") ? "observed" : "velocity_kms";
+        if (!(speed < Units.C_KMS)) {
+            throw g.error(key, String.format(Locale.ROOT, "a speed of %.6g km/s is not below the speed of light"
+                    + " (%.6g km/s)", speed, Units.C_KMS));
+        }
+        double doubtful = Units.NEWTONIAN_LIMIT_FRACTION_OF_C * Units.C_KMS;
+        if (speed > doubtful) {
+            warnings.add(String.format(Locale.ROOT, "%s: %s: a speed of %.4g km/s is %.2f c, above %.1f c, where"
+                    + " the Newtonian model is doubtful", g.where(key), g.keyPath(key), speed, speed / Units.C_KMS,
+                    Units.NEWTONIAN_LIMIT_FRACTION_OF_C));
+        }
+    }
+
+    /** A velocity dispersion must be >= 0 and below c. */
+    private static double dispersion(Node n, double fallback) {
+        double d = n.number("dispersion_kms", fallback);
+        if (d < 0) {
+            throw n.error("dispersion_kms", "must be >= 0 (got " + Node.fmt(d) + ")");
+        }
+        if (!(d < Units.C_KMS)) {
+            throw n.error("dispersion_kms", "must be below the speed of light, " + Node.fmt(Units.C_KMS)
+                    + " km/s (got " + Node.fmt(d) + ")");
+        }
+        return d;
     }
 
     private static Node homeNode(Node root, List<Node> nodes, Observer observer) {
@@ -194,10 +230,7 @@ public final class GroupReader {
         if (Math.sqrt(normal[0] * normal[0] + normal[1] * normal[1] + normal[2] * normal[2]) == 0) {
             throw s.error("normal", "the spin axis must not be the zero vector");
         }
-        double dispersion = s.number("dispersion_kms", 10.0);
-        if (dispersion < 0) {
-            throw s.error("dispersion_kms", "must be >= 0 (got " + Node.fmt(dispersion) + ")");
-        }
+        double dispersion = dispersion(s, 10.0);
         return new StarsSpec(count, shape, radius, normal, dispersion);
     }
 
@@ -209,10 +242,7 @@ public final class GroupReader {
         if (outer <= inner) {
             throw f.error("outer_kpc", "must be larger than inner_kpc (" + Node.fmt(inner) + ")");
         }
-        double dispersion = f.number("dispersion_kms", 0.0);
-        if (dispersion < 0) {
-            throw f.error("dispersion_kms", "must be >= 0 (got " + Node.fmt(dispersion) + ")");
-        }
+        double dispersion = dispersion(f, 0.0);
         return new FlowSpec(count, inner, outer, dispersion);
     }
 

@@ -138,7 +138,7 @@ public final class Node {
             try {
                 v = Long.parseLong(o);
             } catch (NumberFormatException e) {
-                throw new ScenarioException(Overrides.OPTION, keyPath(key), "expected a whole number, got '" + o + "'");
+                throw new ScenarioException(overrides.optionOf(keyPath(key)), keyPath(key), "expected a whole number, got '" + o + "'");
             }
         } else {
             Object raw = table.get(List.of(key));
@@ -205,7 +205,7 @@ public final class Node {
             if (o.equals("true") || o.equals("false")) {
                 return Boolean.parseBoolean(o);
             }
-            throw new ScenarioException(Overrides.OPTION, keyPath(key), "expected true or false, got '" + o + "'");
+            throw new ScenarioException(overrides.optionOf(keyPath(key)), keyPath(key), "expected true or false, got '" + o + "'");
         }
         Object raw = table.get(List.of(key));
         if (raw == null) {
@@ -228,7 +228,7 @@ public final class Node {
         if (whole != null) {
             String[] parts = whole.replace("[", "").replace("]", "").split(",");
             if (parts.length != length) {
-                throw new ScenarioException(Overrides.OPTION, keyPath(key), "expected " + length + " numbers, got '" + whole + "'");
+                throw new ScenarioException(overrides.optionOf(keyPath(key)), keyPath(key), "expected " + length + " numbers, got '" + whole + "'");
             }
             for (int i = 0; i < length; i++) {
                 out[i] = parseOverrideNumber(key, parts[i].trim());
@@ -309,9 +309,14 @@ public final class Node {
         return p == null ? 1 : p.line();
     }
 
-    /** "file:line" of a key (or of this table). */
+    /**
+     * "file:line" of a key (or of this table); for a key whose value came from an override
+     * ({@code --set}, {@code --vary}), that option instead, since the file's line no longer
+     * holds the value at fault.
+     */
     public String where(String key) {
-        return file + ":" + lineOf(key);
+        String option = key == null ? null : overrides.sourceOf(keyPath(key));
+        return option != null ? option : file + ":" + lineOf(key);
     }
 
     /** An error about a key of this table (or the table itself when key is null). */
@@ -348,7 +353,7 @@ public final class Node {
         } catch (NumberFormatException e) {
             // reported below
         }
-        throw new ScenarioException(Overrides.OPTION, keyPath(key), "expected a number, got '" + text + "'");
+        throw new ScenarioException(overrides.optionOf(keyPath(key)), keyPath(key), "expected a number, got '" + text + "'");
     }
 
     private double finite(String key, double v) {

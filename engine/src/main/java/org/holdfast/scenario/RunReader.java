@@ -29,6 +29,10 @@ public final class RunReader {
                 "dark_energy_force", "background_matter", "seed", "dynamical_friction", "coulomb_log", "merge_within_kpc");
         double start = run.number("start_gyr", 0.0);
         double until = Double.isNaN(untilOverrideGyr) ? run.number("until_gyr") : untilOverrideGyr;
+        if (until == start && !Double.isNaN(untilOverrideGyr)) {
+            throw new ScenarioException("--until", null, "the run would be empty: it ends where it starts ("
+                    + Node.fmt(start) + " Gyr from today)");
+        }
         if (until == start) {
             throw run.error("until_gyr", "the run would be empty: until_gyr equals start_gyr (" + Node.fmt(start) + ")");
         }

@@ -27,7 +27,7 @@ public record RunSpec(RunFunction function, boolean sample, double untilGyr, Str
     public RunRecord execute(Path scenario, RunTask task) {
         Overrides o = Overrides.none();
         for (Map.Entry<String, String> e : task.overrides().entrySet()) {
-            o.put(e.getKey(), e.getValue());
+            o.put(e.getKey(), e.getValue(), task.varied().contains(e.getKey()) ? Axis.OPTION : Overrides.OPTION);
         }
         Path snaps = snapshotRoot == null ? null
                 : Path.of(snapshotRoot).resolve(String.format("run-%08d", task.run()));

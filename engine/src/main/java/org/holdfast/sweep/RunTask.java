@@ -2,6 +2,7 @@ package org.holdfast.sweep;
 
 import java.io.Serializable;
 import java.util.LinkedHashMap;
+import java.util.List;
 import java.util.Map;
 
 /**
@@ -12,13 +13,16 @@ import java.util.Map;
  * @param sample sample index at that point
  * @param seed the run's own seed
  * @param overrides dotted key to value, fixed and varied together
+ * @param varied the keys of {@code overrides} that come from {@code --vary} (the others from
+ *     {@code --set}), so that a bad value is blamed on the option that gave it
  */
-public record RunTask(long run, int point, int sample, long seed, Map<String, String> overrides)
-        implements Serializable {
+public record RunTask(long run, int point, int sample, long seed, Map<String, String> overrides,
+        List<String> varied) implements Serializable {
 
     private static final long serialVersionUID = 1L;
 
     public RunTask {
         overrides = new LinkedHashMap<>(overrides);
+        varied = List.copyOf(varied);
     }
 }

@@ -12,6 +12,7 @@ import java.util.Map;
 
 import com.fasterxml.jackson.databind.SerializationFeature;
 
+import org.holdfast.output.RunFolder;
 import org.holdfast.scenario.ScenarioException;
 
 /**
@@ -59,8 +60,13 @@ public final class Sweep {
     public static Summary run(SweepPlan plan, Path scenario, Path dir, RunSpec spec, SweepEngine engine,
             Listener listener) throws Exception {
         boolean fresh = !Files.exists(dir.resolve(PLAN_FILE));
-        Files.createDirectories(dir);
-        claim(dir, plan);
+        Path created = RunFolder.makeFolder(dir, "--out");
+        try {
+            claim(dir, plan);
+        } catch (ScenarioException e) {
+            RunFolder.removeCreated(dir, created);
+            throw e;
+        }
         List<RunRecord> all;
         long already;
         long made;
@@ -84,11 +90,11 @@ public final class Sweep {
                     listener.runDone(r);
                 });
             } catch (ScenarioException e) {
-                if (fresh && all.isEmpty()) {
-                    // Bad input found by the first run: leave no trace, so the corrected command starts clean.
+                if (fresh) {
+                    // Bad input found by a run of a new sweep: leave no trace (the runs made so far
+                    // belong to a plan that cannot finish), so the corrected command starts clean.
                     journal.close();
-                    Files.deleteIfExists(dir.resolve(Journal.FILE));
-                    Files.deleteIfExists(dir.resolve(PLAN_FILE));
+                    removeNewSweep(dir, created);
                 }
                 throw e;
             }
@@ -97,6 +103,25 @@ public final class Sweep {
         listener.finish();
         List<Path> written = writeTables(dir, plan, ResultsTable.sorted(all));
         return new Summary(plan.runsInShard(), already, made, written);
+    }
+
+    /** Removes what a new sweep wrote into its folder, and the folder itself if this sweep made it. */
+    private static void removeNewSweep(Path dir, Path created) throws IOException {
+        deleteTree(dir.resolve("snapshots"));
+        Files.deleteIfExists(dir.resolve(Journal.FILE));
+        Files.deleteIfExists(dir.resolve(PLAN_FILE));
+        RunFolder.removeCreated(dir, created);
+    }
+
+    private static void deleteTree(Path p) throws IOException {
+        if (!Files.exists(p)) {
+            return;
+        }
+        try (var walk = Files.walk(p)) {
+            for (Path q : walk.sorted(java.util.Comparator.reverseOrder()).toList()) {
+                Files.deleteIfExists(q);
+            }
+        }
     }
 
     /** Writes results.csv and, when the plan covers the whole sweep, fractions.csv and the picture. */
@@ -123,13 +148,13 @@ public final class Sweep {
         Path file = dir.resolve(PLAN_FILE);
         if (Files.exists(file)) {
             SweepPlan there = readPlan(dir);
-            String diff = plan.differenceFrom(there);
+            SweepPlan.Difference diff = plan.differenceFrom(there);
             if (diff == null && (there.shardIndex() != plan.shardIndex() || there.shardCount() != plan.shardCount())) {
-                diff = "--shard " + there.shardIndex() + "/" + there.shardCount();
+                diff = new SweepPlan.Difference(shard(there), shard(plan));
             }
             if (diff != null) {
-                throw new ScenarioException("--out", dir.toString(),
-                        "holds a different sweep (it was made with " + diff + "); choose another folder");
+                throw new ScenarioException("--out", dir.toString(), "holds a different sweep: the folder was made with "
+                        + diff.other() + ", this command asks for " + diff.mine() + "; choose another folder");
             }
             return;
         }
@@ -141,6 +166,10 @@ public final class Sweep {
         }
         byte[] json = Journal.JSON.copy().enable(SerializationFeature.INDENT_OUTPUT).writeValueAsBytes(plan);
         Outputs.writeAtomically(file, json);
+    }
+
+    private static String shard(SweepPlan p) {
+        return p.shardCount() == 1 ? "no --shard" : "--shard " + p.shardIndex() + "/" + p.shardCount();
     }
 
     /** Reads a folder's plan. */

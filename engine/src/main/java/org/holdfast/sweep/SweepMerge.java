@@ -10,6 +10,7 @@ import java.util.TreeMap;
 
 import com.fasterxml.jackson.databind.SerializationFeature;
 
+import org.holdfast.output.RunFolder;
 import org.holdfast.scenario.ScenarioException;
 
 /**
@@ -41,13 +42,13 @@ public final class SweepMerge {
                 first = p;
                 firstDir = d;
             } else {
-                String diff = first.differenceFrom(p);
+                SweepPlan.Difference diff = first.differenceFrom(p);
                 if (diff == null && p.shardCount() != first.shardCount()) {
-                    diff = "--shard .../" + p.shardCount() + " vs .../" + first.shardCount();
+                    diff = new SweepPlan.Difference("--shard I/" + p.shardCount(), "--shard I/" + first.shardCount());
                 }
                 if (diff != null) {
                     throw new ScenarioException(d.toString(), null, "belongs to a different sweep than " + firstDir
-                            + ": " + diff);
+                            + ": it was made with " + diff.other() + ", " + firstDir + " with " + diff.mine());
                 }
             }
             Path earlier = byShard.put(p.shardIndex(), d);
@@ -74,10 +75,10 @@ public final class SweepMerge {
             throw new ScenarioException("sweep-merge", null, "missing shard(s) " + missing + " of " + first.shardCount());
         }
         SweepPlan whole = first.withShard(1, 1);
-        Files.createDirectories(out);
         if (Files.exists(out.resolve(Sweep.PLAN_FILE)) || Files.exists(out.resolve(Journal.FILE))) {
             throw new ScenarioException("--out", out.toString(), "already holds a sweep; choose an empty folder");
         }
+        RunFolder.makeFolder(out, "--out");
         ResultsTable.sorted(all);
         Journal.writeAll(out, all);
         Outputs.writeAtomically(out.resolve(Sweep.PLAN_FILE),

@@ -101,16 +101,26 @@ public record SweepPlan(int format, String scenario, String scenarioSha256, Map<
         return o;
     }
 
+    /** The keys that the axes vary, in order. */
+    public List<String> variedKeys() {
+        List<String> keys = new ArrayList<>();
+        for (Axis a : axes) {
+            keys.add(a.key());
+        }
+        return keys;
+    }
+
     /** The runs of this shard that are not yet done, with their seeds, in run order. */
     public List<RunTask> pendingTasks(BitSet done) {
         List<RunTask> tasks = new ArrayList<>();
         SeedPlan seeds = new SeedPlan(seed);
+        List<String> varied = variedKeys();
         for (int p = 0; p < points(); p++) {
             long[] s = seeds.forPoint(p, samples);
             for (int k = 0; k < samples; k++) {
                 long run = (long) p * samples + k;
                 if (inShard(run) && !done.get((int) run)) {
-                    tasks.add(new RunTask(run, p, k, s[k], overridesAt(p)));
+                    tasks.add(new RunTask(run, p, k, s[k], overridesAt(p), varied));
                 }
             }
         }
@@ -124,36 +134,64 @@ public record SweepPlan(int format, String scenario, String scenarioSha256, Map<
     }
 
     /**
+     * The first setting in which two sweeps differ, in the words of the command line.
+     *
+     * @param other how the other sweep has it ("--seed 43", "no --until")
+     * @param mine how this sweep has it
+     */
+    public record Difference(String other, String mine) {
+    }
+
+    /**
      * How this sweep differs from another, ignoring the shard and the scenario's file name.
      *
-     * @return the first differing field in words, or null if both describe the same sweep
+     * @return the first differing setting, or null if both describe the same sweep
      */
-    public String differenceFrom(SweepPlan o) {
+    public Difference differenceFrom(SweepPlan o) {
         if (format != o.format) {
-            return "layout version " + o.format + " vs " + format;
+            return new Difference("layout version " + o.format, "layout version " + format);
         }
         if (!scenarioSha256.equals(o.scenarioSha256)) {
-            return "the scenario's content (SHA-256 " + shortHash(o.scenarioSha256) + " vs " + shortHash(scenarioSha256) + ")";
+            return new Difference("a scenario with SHA-256 " + shortHash(o.scenarioSha256),
+                    "a scenario with SHA-256 " + shortHash(scenarioSha256));
         }
         if (!set.equals(o.set)) {
-            return "--set " + o.set + " vs " + set;
+            return new Difference(describeSet(o.set), describeSet(set));
         }
         if (!axes.equals(o.axes)) {
-            return "--vary " + describe(o.axes) + " vs " + describe(axes);
+            return new Difference(describe(o.axes), describe(axes));
         }
         if (samples != o.samples || sample != o.sample) {
-            return "--samples " + o.samples + " vs " + samples;
+            return new Difference(o.describeSamples(), describeSamples());
         }
         if (seed != o.seed) {
-            return "--seed " + o.seed + " vs " + seed;
+            return new Difference("--seed " + o.seed, "--seed " + seed);
         }
         if (!Objects.equals(untilGyr, o.untilGyr)) {
-            return "--until " + o.untilGyr + " vs " + untilGyr;
+            return new Difference(describeUntil(o.untilGyr), describeUntil(untilGyr));
         }
         if (keepSnapshots != o.keepSnapshots) {
-            return "--keep-snapshots";
+            return new Difference(o.keepSnapshots ? "--keep-snapshots" : "no --keep-snapshots",
+                    keepSnapshots ? "--keep-snapshots" : "no --keep-snapshots");
         }
         return null;
+    }
+
+    private String describeSamples() {
+        return sample ? "--samples " + samples : "no --samples";
+    }
+
+    private static String describeUntil(Double until) {
+        return until == null ? "no --until" : "--until " + until;
+    }
+
+    private static String describeSet(Map<String, String> set) {
+        if (set.isEmpty()) {
+            return "no --set";
+        }
+        List<String> parts = new ArrayList<>();
+        set.forEach((k, v) -> parts.add("--set " + k + "=" + v));
+        return String.join(" ", parts);
     }
 
     private static String shortHash(String h) {
@@ -161,9 +199,13 @@ public record SweepPlan(int format, String scenario, String scenarioSha256, Map<
     }
 
     private static String describe(List<Axis> axes) {
+        if (axes.isEmpty()) {
+            return "no --vary";
+        }
         List<String> parts = new ArrayList<>();
         for (Axis a : axes) {
-            parts.add(a.key() + "(" + a.size() + " values)");
+            parts.add("--vary " + a.key() + " (" + a.size() + (a.size() == 1 ? " value" : " values") + " from "
+                    + Axis.format(a.values().get(0)) + " to " + Axis.format(a.values().get(a.size() - 1)) + ")");
         }
         return String.join(" ", parts);
     }

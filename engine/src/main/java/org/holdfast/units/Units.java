@@ -57,6 +57,15 @@ public final class Units {
     /** One kpc/Gyr in km/s. */
     public static final double KPC_PER_GYR_TO_KMS = 1.0 / KMS_TO_KPC_PER_GYR;
 
+    /** Speed of light in kpc/Gyr (about 306,601), from the exact SI value, kpc and Gyr. */
+    public static final double C = C_KMS * KMS_TO_KPC_PER_GYR;
+
+    /**
+     * The fraction of c above which the Newtonian model of a group is doubtful: at v = 0.1 c the
+     * relativistic corrections, of order (v/c)^2, reach one per cent (common practice).
+     */
+    public static final double NEWTONIAN_LIMIT_FRACTION_OF_C = 0.1;
+
     /** One km/s/Mpc in 1/Gyr (1/977.792). */
     public static final double KMS_PER_MPC_TO_PER_GYR = GYR_S / MPC_KM;
 

@@ -143,6 +143,52 @@ class EvolveCommandTest {
     }
 
     @Test
+    void aBadOverrideIsBlamedOnTheOptionNotOnTheFilesLine() throws IOException {
+        // Bel's mass is 2e11 on line 20 of the file; the bad value is the one given with --set.
+        Path f = dir.resolve("pair.toml");
+        Path out = dir.resolve("never-set");
+        CommandRunner.Result r = CommandRunner.run("evolve", f.toString(), "--out", out.toString(),
+                "--set", "galaxy.Bel.mass_msun=-1e12");
+        assertEquals(Holdfast.EXIT_BAD_INPUT, r.exitCode(), r.err());
+        assertEquals("holdfast evolve: --set: galaxy.Bel.mass_msun: must be > 0 (got -1.00000e+12)", r.err().strip());
+        assertFalse(Files.exists(out));
+    }
+
+    @Test
+    void anOutputFolderThatCannotBeMadeIsBadInputBeforeTheRunIsAnnounced() throws IOException {
+        Path blocker = dir.resolve("a-file");
+        Files.writeString(blocker, "not a folder");
+        Path out = blocker.resolve("run");
+        CommandRunner.Result r = CommandRunner.run("evolve", dir.resolve("pair.toml").toString(), "--out", out.toString());
+        assertEquals(Holdfast.EXIT_BAD_INPUT, r.exitCode(), r.err());
+        assertEquals(1, r.err().strip().lines().count(), r.err());
+        assertTrue(r.err().startsWith("holdfast evolve: --out: cannot create the folder " + out + ": "), r.err());
+        assertFalse(r.err().contains("Exception"), r.err());
+        assertEquals("", r.out(), "nothing announced");
+    }
+
+    @Test
+    void sampleOnAScenarioWithoutUncertainNumbersSaysItChangesNothing() throws IOException {
+        Path f = dir.resolve("plain-pair.toml");
+        Files.writeString(f, SCENARIO.substring(0, SCENARIO.indexOf("[[galaxy]]")) + """
+                [[galaxy]]
+                name = "Arn"
+                mass_msun = 1e12
+                position_kpc = [0, 0, 0]
+                [[galaxy]]
+                name = "Bel"
+                mass_msun = 2e11
+                position_kpc = [300, 0, 0]
+                velocity_kms = [0, 80, 0]
+                """);
+        CommandRunner.Result r = CommandRunner.run("evolve", f.toString(), "--out", dir.resolve("sampled").toString(),
+                "--sample", "3", "--until", "0.2");
+        assertEquals(0, r.exitCode(), r.err());
+        assertTrue(r.out().contains("\n  the scenario has no uncertain numbers, so --sample 3 changes nothing\n"), r.out());
+        assertEquals("", r.err());
+    }
+
+    @Test
     void tracersThatCannotFitInTheHeapAreRefusedBeforeAnythingIsAllocated() throws IOException {
         Path f = dir.resolve("huge.toml");
         Files.writeString(f, SCENARIO.replace("count = 300", "count = 90000000"));

@@ -146,7 +146,8 @@ class SweepCommandTest {
         CommandRunner.Result mixed = CommandRunner.run("sweep-merge", tmp.resolve("s1").toString(),
                 tmp.resolve("s2").toString(), "--out", tmp.resolve("m2").toString());
         assertEquals(Holdfast.EXIT_BAD_INPUT, mixed.exitCode());
-        assertTrue(mixed.err().contains("different sweep") && mixed.err().contains("--seed 43 vs 42"), mixed.err());
+        assertTrue(mixed.err().contains("different sweep") && mixed.err().contains(
+                "it was made with --seed 43, " + tmp.resolve("s1") + " with --seed 42"), mixed.err());
     }
 
     @Test
@@ -172,7 +173,9 @@ class SweepCommandTest {
         CommandRunner.Result r = CommandRunner.run("sweep", scenario.toString(), "--out", tmp.resolve("x").toString(),
                 "--vary", "cosmology.dark_energy.w0=-1.3:-0.9:7", "--samples", "4", "--seed", "42");
         assertEquals(Holdfast.EXIT_BAD_INPUT, r.exitCode());
-        assertTrue(r.err().contains("holds a different sweep"), r.err());
+        assertTrue(r.err().contains("holds a different sweep: the folder was made with --vary cosmology.dark_energy.w0"
+                + " (5 values from -1.3 to -0.9), this command asks for --vary cosmology.dark_energy.w0"
+                + " (7 values from -1.3 to -0.9); choose another folder"), r.err());
     }
 
     @Test
@@ -222,6 +225,43 @@ class SweepCommandTest {
                 "--set", "run.accuracy=0.02");
         assertFalse(Files.exists(tmp.resolve("bad/sweep.json")), "nothing half-written");
         assertFalse(Files.exists(tmp.resolve("bad/runs.jsonl")), "nothing half-written");
+    }
+
+    @Test
+    void aBadVariedValueIsBlamedOnVaryAndLeavesNoFolder() {
+        Path out = tmp.resolve("new/deeper");
+        assertBadInput("--vary: galaxy.Vesk.mass_msun: must be > 0 (got -1.00000e+11)", "sweep", scenario.toString(),
+                "--out", out.toString(), "--vary", "galaxy.Vesk.mass_msun=-1e11,1e11");
+        assertFalse(Files.exists(tmp.resolve("new")), "no folder left behind");
+        // The bad value last: still refused before anything is written.
+        assertBadInput("--vary: cosmology.h0: must be > 0 km/s/Mpc", "sweep", scenario.toString(),
+                "--out", out.toString(), "--vary", "cosmology.h0=70,-70");
+        assertFalse(Files.exists(tmp.resolve("new")), "no folder left behind");
+        assertBadInput("--set: galaxy.Vesk.mass_msun: must be > 0", "sweep", scenario.toString(),
+                "--out", out.toString(), "--set", "galaxy.Vesk.mass_msun=-5");
+        assertFalse(Files.exists(tmp.resolve("new")), "no folder left behind");
+    }
+
+    @Test
+    void valuesThatFailOnlyTogetherAreFoundByTheirRunAndTheNewFolderIsRemoved() {
+        // Vesk at (0, 0, 0) is where Orrimal is. Each value alone is fine, so the check before
+        // the runs passes; the fourth run meets the combination after three runs were made.
+        Path out = tmp.resolve("combo");
+        assertBadInput("--vary: galaxy.Vesk.position_kpc: galaxy 'Vesk' is at the same place as 'Orrimal'", "sweep",
+                scenario.toString(), "--out", out.toString(), "--workers", "1",
+                "--vary", "galaxy.Vesk.position_kpc.0=300,0", "--vary", "galaxy.Vesk.position_kpc.1=5,0");
+        assertFalse(Files.exists(out), "the folder this sweep made is gone");
+    }
+
+    @Test
+    void anOutputFolderThatCannotBeMadeIsOneLineNamingOut() throws IOException {
+        Path blocker = tmp.resolve("a-file");
+        Files.writeString(blocker, "not a folder");
+        assertBadInput("--out: cannot create the folder " + blocker.resolve("s") + ": ", "sweep", scenario.toString(),
+                "--out", blocker.resolve("s").toString(), "--vary", "cosmology.dark_energy.w0=-1.2,-1");
+        assertEquals(0, sweep("whole").exitCode());
+        assertBadInput("--out: cannot create the folder " + blocker.resolve("m") + ": ", "sweep-merge",
+                tmp.resolve("whole").toString(), "--out", blocker.resolve("m").toString());
     }
 
     @Test

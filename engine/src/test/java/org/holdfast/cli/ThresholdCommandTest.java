@@ -103,5 +103,17 @@ class ThresholdCommandTest {
         CommandRunner.Result range = CommandRunner.run("threshold", s, "--vary", "cosmology.dark_energy.w0=-1:-2",
                 "--fate", "bound");
         assertEquals(Holdfast.EXIT_BAD_INPUT, range.exitCode());
+        for (String t : new String[] {"-5", "0"}) {
+            CommandRunner.Result past = CommandRunner.run("threshold", s, "--vary", "cosmology.dark_energy.w0=-2:-1",
+                    "--member", "Vesk", "--fate", "ripped", "--within-gyr", t);
+            assertEquals(Holdfast.EXIT_BAD_INPUT, past.exitCode(), past.err());
+            assertEquals(1, past.err().strip().lines().count(), past.err());
+            assertTrue(past.err().contains("--within-gyr: must be later than the runs' start (0.000 Gyr from today)"),
+                    past.err());
+        }
+        CommandRunner.Result end = CommandRunner.run("threshold", s, "--vary", "galaxy.Vesk.mass_msun=-1e11:1e11",
+                "--member", "Vesk", "--fate", "ripped");
+        assertEquals(Holdfast.EXIT_BAD_INPUT, end.exitCode(), end.err());
+        assertTrue(end.err().contains("--vary: galaxy.Vesk.mass_msun: must be > 0"), end.err());
     }
 }

@@ -88,11 +88,14 @@ class ValidateCommandTest {
         "same place       | position_kpc = [-300, 0, 0]|position_kpc = [100, 0, 0] | s.toml:16: galaxy.Bel.position_kpc: galaxy 'Bel' is at the same place as 'Arn'",
         "unknown profile  | profile = \"nfw\"|profile = \"nfx\" | galaxy.Arn.halo.profile: unknown value 'nfx' (did you mean 'nfw'?)",
         "too many tracers | velocity_kms = [0, -30, 0]|stars = { count = 2000000000, radius_kpc = 3 } | more than the 100000000 one run can hold",
+        "faster than c    | velocity_kms = [0, -30, 0]|velocity_kms = [0, 1e6, 0] | s.toml:17: galaxy.Bel.velocity_kms: a speed of 1.00000e+06 km/s is not below the speed of light (299792 km/s)",
+        "as fast as c     | velocity_kms = [0, -30, 0]|velocity_kms = [299792.458, 0, 0] | s.toml:17: galaxy.Bel.velocity_kms: a speed of 299792 km/s is not below the speed of light",
+        "dispersion >= c  | velocity_kms = [0, -30, 0]|stars = { count = 20, radius_kpc = 3, dispersion_kms = 4e5 } | galaxy.Bel.stars.dispersion_kms: must be below the speed of light",
     })
     void badInputIsOneLineNamingFileLineAndKey(String what, String from, String to, String expected) throws IOException {
         String text = HEAD + PAIR;
         int at = what.equals("duplicate name") || what.equals("same place") || what.equals("too many tracers")
-                ? text.lastIndexOf(from) : text.indexOf(from);
+                || what.contains(" c") ? text.lastIndexOf(from) : text.indexOf(from);
         text = text.substring(0, at) + to + text.substring(at + from.length());
         Path f = write(text);
         CommandRunner.Result r = CommandRunner.run("validate", f.toString());
@@ -100,6 +103,22 @@ class ValidateCommandTest {
         assertTrue(r.err().contains(expected), what + ": " + r.err());
         assertEquals(1, r.err().strip().lines().count(), r.err());
         assertFalse(r.err().contains("Exception"), r.err());
+    }
+
+    @Test
+    void aSpeedAboveATenthOfCIsAllowedWithAWarning() throws IOException {
+        Path f = write(HEAD + PAIR.replace("velocity_kms = [0, -30, 0]", "velocity_kms = [0, -40000, 0]"));
+        CommandRunner.Result r = CommandRunner.run("validate", f.toString());
+        assertEquals(0, r.exitCode(), r.err());
+        assertTrue(r.out().contains("  warning: " + f + ":17: galaxy.Bel.velocity_kms: a speed of 4.000e+04 km/s is"
+                + " 0.13 c, above 0.1 c, where the Newtonian model is doubtful"), r.out());
+        CommandRunner.Result slow = CommandRunner.run("validate", write(HEAD + PAIR).toString());
+        assertFalse(slow.out().contains("warning"), slow.out());
+        CommandRunner.Result set = CommandRunner.run("validate", write(HEAD + PAIR).toString(),
+                "--set", "galaxy.Bel.velocity_kms.1=-3e5");
+        assertEquals(Holdfast.EXIT_BAD_INPUT, set.exitCode(), set.err());
+        assertTrue(set.err().contains("--set: galaxy.Bel.velocity_kms: a speed of 300000 km/s is not below the speed"
+                + " of light"), set.err());
     }
 
     @Test

@@ -30,4 +30,15 @@ class FateReportTest {
         String line = FateReport.timeline(List.of(new RunEvent(3.2, "merged", List.of("Orla", "Pim"))));
         assertTrue(line.contains("Orla and Pim merge"), line);
     }
+
+    @Test
+    void theMemberLeftWhenTheGroupComesApartIsNotSaidToStayBound() {
+        List<MemberFate> f = List.of(new MemberFate("Orla", Fate.BOUND, Double.NaN, null),
+                new MemberFate("Quist", Fate.RIPPED, 20.1, null));
+        String apart = FateReport.table(f, FateTracker.Verdict.DISSOLVED);
+        assertTrue(apart.contains("Orla   is what is left of the group, alone: no other member stays bound to it"), apart);
+        assertTrue(!apart.contains("stays bound to the group"), apart);
+        String partly = FateReport.table(f, FateTracker.Verdict.PARTLY_BOUND);
+        assertTrue(partly.contains("Orla   stays bound to the group"), partly);
+    }
 }

@@ -51,6 +51,19 @@ class NodeTest {
     }
 
     @Test
+    void aProblemWithAnOverriddenValueNamesTheOptionThatGaveIt() {
+        Overrides o = Overrides.parse(List.of("galaxy.Bo.mass_msun=-3")).put("galaxy.Bo.position_kpc.1", "4", "--vary");
+        Node bo = parse("[[galaxy]]\nname = \"Bo\"\nmass_msun = 1e11\nposition_kpc = [1, 2, 3]\nhalo = 7\n", o)
+                .tables("galaxy", "name").get(0);
+        ScenarioException mass = assertThrows(ScenarioException.class, () -> bo.positive("mass_msun"));
+        assertEquals("--set", mass.where());
+        assertEquals("--set: galaxy.Bo.mass_msun: must be > 0 (got -3.00000)", mass.getMessage());
+        bo.vector("position_kpc", 3);
+        assertEquals("--vary", bo.error("position_kpc", "x").where(), "one component came from --vary");
+        assertEquals("test.toml:5", bo.error("halo", "x").where(), "a key the overrides did not touch");
+    }
+
+    @Test
     void anUnusedOverrideIsReported() {
         Overrides o = Overrides.parse(List.of("run.untill=7"));
         Node root = parse("[run]\nuntil_gyr = 5\n", o);

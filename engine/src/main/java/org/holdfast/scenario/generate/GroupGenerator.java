@@ -18,7 +18,10 @@ import org.holdfast.units.Units;
  * between 0.25 and 1 and dwarfs between 0.001 and 0.025 of a common upper mass, then all
  * scaled together so that they add up to the total asked for.</li>
  * <li>Places: uniform inside the sphere, no two members closer than a tenth of the mean
- * spacing; then shifted so that the centre of mass is at the origin.</li>
+ * spacing; then shifted so that the centre of mass is at the origin and, if that shift took a
+ * member outside the sphere, all drawn in towards the centre by one factor so that the
+ * farthest lies on it (the shape of the group is kept; a heavy member off-centre is what
+ * moves the centre of mass).</li>
  * <li>Velocities: isotropic Gaussian directions and sizes, the centre-of-mass velocity removed,
  * then scaled by one factor so that 2T/|W| equals the virial ratio asked for, where T is the
  * kinetic energy and W = -sum G m_i m_j / r_ij the potential energy of the members as point
@@ -67,6 +70,7 @@ public final class GroupGenerator {
             }
         }
         centre(m, x);
+        fitInside(x, r.radiusKpc());
         centre(m, v);
         double t = kineticEnergy(m, v);
         double w = potentialEnergy(m, x);
@@ -129,6 +133,23 @@ public final class GroupGenerator {
             }
         }
         return x;
+    }
+
+    /** Scales positions about the origin by one factor, if needed, so that none lies beyond the radius. */
+    static void fitInside(double[][] x, double radius) {
+        double far = 0;
+        for (double[] p : x) {
+            far = Math.max(far, Math.sqrt(p[0] * p[0] + p[1] * p[1] + p[2] * p[2]));
+        }
+        if (far <= radius) {
+            return;
+        }
+        double f = radius / far;
+        for (double[] p : x) {
+            for (int k = 0; k < 3; k++) {
+                p[k] *= f;
+            }
+        }
     }
 
     /** Moves a set of vectors to their mass-weighted mean. */

@@ -98,6 +98,21 @@ class NewCommandTest {
         }
     }
 
+    /** --help: "Members lie inside a sphere of this radius around their centre of mass". */
+    @Test
+    void everyMemberLiesInsideTheRadiusAroundTheCentreOfMass() {
+        // Seed 4 with 600 kpc put a member 733 kpc out before positions were fitted after centring.
+        for (int seed = 1; seed <= 30; seed++) {
+            GroupRecipe r = new GroupRecipe(2, seed <= 10 ? 4 : 1 + seed % 7, 3e12, 600, 1.0, seed, 50, 0, 0);
+            double far = 0;
+            for (GroupGenerator.Member m : GroupGenerator.generate(r)) {
+                double[] p = m.positionKpc();
+                far = Math.max(far, Math.sqrt(p[0] * p[0] + p[1] * p[1] + p[2] * p[2]));
+            }
+            assertTrue(far <= 600 * (1 + 1e-12), "seed " + seed + ": a member " + far + " kpc out");
+        }
+    }
+
     @Test
     void cosmologyIsPlanck2018AndTheSameSeedGivesTheSameFile() throws Exception {
         Path a = tmp.resolve("a.toml");
@@ -183,5 +198,9 @@ class NewCommandTest {
         CommandRunner.Result r = CommandRunner.run("new", "--out", exists.toString());
         assertEquals(Holdfast.EXIT_BAD_INPUT, r.exitCode());
         assertEquals("keep me", Files.readString(exists));
+        CommandRunner.Result under = CommandRunner.run("new", "--out", exists.resolve("g.toml").toString());
+        assertEquals(Holdfast.EXIT_BAD_INPUT, under.exitCode(), under.err());
+        assertTrue(under.err().startsWith("holdfast new: --out: cannot create the folder " + exists + ": "), under.err());
+        assertEquals(1, under.err().strip().lines().count(), under.err());
     }
 }
