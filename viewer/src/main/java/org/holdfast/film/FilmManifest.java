@@ -80,6 +80,7 @@ final class FilmManifest {
         m.put("last_gyr", film.clock().simGyr(film.filmSecondOf(film.frameCount())));
         m.put("clock", film.clock().describe());
         m.put("camera", cameraOption == null ? "film" : cameraOption);
+        m.put("follow", film.follow());
         m.put("eye_first_kpc", eye(film, 0));
         m.put("eye_last_kpc", eye(film, film.filmSecondOf(film.frameCount())));
         m.put("overlays", film.overlays().stream().map(o -> o.name().toLowerCase(Locale.ROOT)).sorted().toList());

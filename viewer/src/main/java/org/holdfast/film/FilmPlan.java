@@ -89,7 +89,7 @@ public final class FilmPlan {
                 film.has("from_gyr") ? Double.NaN : run.firstGyr()));
         putTime(overrides, "film.to_gyr", time("--to-gyr", o.toGyr(), run,
                 film.has("to_gyr") ? Double.NaN : run.lastGyr()));
-        FilmSpec spec = FilmReader.read(root, o.still());
+        FilmSpec spec = FilmReader.read(root, o.still(), run.initialNames());
         checkWithinRun(spec, run, film);
         if (spec.frameCount() > MAX_FRAMES) {
             String where = o.seconds() != null ? "--seconds" : o.fps() != null ? "--fps" : film.where("length_s");
@@ -114,7 +114,7 @@ public final class FilmPlan {
             var c = cam.camera(Projection.FLAT);
             CameraTrack fixed = (s, dest) -> RunFrameSource.poseOf(c, dest);
             spec = new FilmSpec(spec.lengthS(), spec.frameRate(), spec.view(), spec.widthPx(), spec.heightPx(),
-                    spec.domeSpanDeg(), spec.domeTiltDeg(), spec.stretch(), spec.clock(), fixed, spec.overlays());
+                    spec.domeSpanDeg(), spec.domeTiltDeg(), spec.stretch(), spec.clock(), fixed, spec.overlays(), null);
         }
         return spec;
     }
@@ -179,6 +179,11 @@ public final class FilmPlan {
         b.append("to_gyr = ").append(plain(run.lastGyr())).append('\n');
         if (countdown) {
             b.append("final_gyr = ").append(plain(run.ripGyr())).append('\n');
+            // near a rip the members fly far apart, the centre of mass among them: ride with the first
+            if (!run.initialNames().isEmpty()) {
+                String name = run.initialNames().get(0).replace("\\", "\\\\").replace("\"", "\\\"");
+                b.append("follow = \"").append(name).append("\"\n");
+            }
         }
         b.append("[film.orbit]\ncentre_kpc = [0, 0, 0]\nup = [0, 0, 1]\n");
         b.append("radius_kpc = ").append(plain(d * Math.cos(elevation))).append('\n');

@@ -34,6 +34,7 @@ import org.joml.Vector3d;
  * to_gyr = 40              # required, simulated time at the last frame
  * final_gyr = 41.5         # countdown only: the rip, or a horizon of your choice
  * camera = "keyframes"     # keyframes | orbit | approach
+ * follow = "Aldermere"     # optional: the camera's track is relative to this member's centre
  *
  * [film.show]              # overlays, each true by default
  * clock = true, scale_factor = true, scale_bar = true, names = true, events = true
@@ -66,19 +67,20 @@ public final class FilmReader {
      * @throws ScenarioException if the table is missing or any key is wrong
      */
     public static FilmSpec read(Node root) {
-        return read(root, false);
+        return read(root, false, null);
     }
 
     /**
-     * As {@link #read(Node)}; {@code still} lifts the even sizes a video needs, for one PNG.
+     * As {@link #read(Node)}; {@code still} lifts the even sizes a video needs, for one PNG, and
+     * {@code members} (or null) are the names {@code follow} may take.
      *
      * @throws ScenarioException if the table is missing or any key is wrong
      */
-    static FilmSpec read(Node root, boolean still) {
+    static FilmSpec read(Node root, boolean still, List<String> members) {
         Node film = root.requireTable("film");
         film.allowOnly("length_s", "frame_rate", "view", "frame_px", "dome_span_deg", "dome_tilt_deg", "stretch",
                 "asinh_gain", "asinh_softening", "linear_gain", "clock", "from_gyr", "to_gyr", "final_gyr", "camera",
-                "show", "orbit", "approach", "keyframe");
+                "show", "orbit", "approach", "keyframe", "follow");
         double lengthS = film.positive("length_s");
         int rate = (int) film.integer("frame_rate", 1, 240, 30);
         String view = film.choice("view", VIEWS, "flat");
@@ -96,7 +98,13 @@ public final class FilmReader {
                 : Stretch.asinh(film.positive("asinh_gain", 0.4), film.positive("asinh_softening", 9));
         FilmClock clock = clock(film, FilmSpec.lastFrameS(lengthS, rate));
         CameraTrack camera = camera(film, lengthS);
-        return new FilmSpec(lengthS, rate, view, size[0], size[1], span, tilt, stretch, clock, camera, overlays(film));
+        String follow = film.has("follow") ? film.string("follow") : null;
+        if (follow != null && members != null && !members.contains(follow)) {
+            throw film.error("follow", "no member named '" + follow + "' in this run; its members: "
+                    + String.join(", ", members));
+        }
+        return new FilmSpec(lengthS, rate, view, size[0], size[1], span, tilt, stretch, clock, camera, overlays(film),
+                follow);
     }
 
     private static int[] frameSize(Node film, String view, boolean still) {

@@ -15,9 +15,12 @@ import org.holdfast.render.projection.Projection;
  * stretch, the clock mapping, the camera and the overlays shown.
  *
  * @param view flat, dome or panorama
+ * @param follow the member the camera rides with (its track is then relative to that member's
+ *        centre), or null for a camera fixed to the run's frame
  */
 public record FilmSpec(double lengthS, int frameRate, String view, int widthPx, int heightPx, double domeSpanDeg,
-        double domeTiltDeg, Stretch stretch, FilmClock clock, CameraTrack camera, Set<Overlay> overlays) {
+        double domeTiltDeg, Stretch stretch, FilmClock clock, CameraTrack camera, Set<Overlay> overlays,
+        String follow) {
 
     public FilmSpec {
         overlays = Set.copyOf(overlays);

@@ -13,6 +13,7 @@ import java.util.concurrent.Callable;
 
 import org.holdfast.output.RunFolder;
 import org.holdfast.render.CameraPose;
+import org.holdfast.render.SceneFrame;
 import org.holdfast.render.FrameFiles;
 import org.holdfast.render.FrameRenderer;
 import org.holdfast.render.RenderSettings;
@@ -175,7 +176,12 @@ public final class RenderCommand implements Callable<Integer> {
         Path file = out != null ? out : Path.of(String.format(Locale.ROOT, "%s-still-%s.png", stem(), FilmPlan.plain(still)));
         ReplayScene scene = new ReplayScene(run);
         try (FrameRenderer r = new FrameRenderer(film.projection(), settings(film, scene))) {
-            BufferedImage img = r.render(scene.at(still), film.camera().poseAt(filmS, new CameraPose()));
+            SceneFrame frame = scene.at(still);
+            CameraPose pose = film.camera().poseAt(filmS, new CameraPose());
+            if (film.follow() != null) {
+                new FollowTarget(film.follow(), run.events()).shift(frame, pose);
+            }
+            BufferedImage img = r.render(frame, pose);
             int[] argb = img.getRGB(0, 0, img.getWidth(), img.getHeight(), null, 0, img.getWidth());
             Screenshots.writePng(file, argb, img.getWidth(), img.getHeight());
         }
@@ -194,6 +200,7 @@ public final class RenderCommand implements Callable<Integer> {
                 FilmPlan.shown(film.clock().simGyr(film.filmSecondOf(n))), dir));
         ReplayScene scene = new ReplayScene(run);
         CameraPose pose = new CameraPose();
+        FollowTarget follow = film.follow() == null ? null : new FollowTarget(film.follow(), run.events());
         FrameProgress progress = new FrameProgress(o, n, FrameProgress.onTerminal(), quiet);
         try (FrameRenderer r = new FrameRenderer(film.projection(), settings(film, scene)); progress) {
             for (int i = 1; i <= n; i++) {
@@ -203,7 +210,12 @@ public final class RenderCommand implements Callable<Integer> {
                 }
                 double s = film.filmSecondOf(i);
                 double t = Math.max(run.earliestGyr(), Math.min(run.latestGyr(), film.clock().simGyr(s)));
-                files.write(i, r.render(scene.at(t), film.camera().poseAt(s, pose)));
+                SceneFrame frame = scene.at(t);
+                film.camera().poseAt(s, pose);
+                if (follow != null) {
+                    follow.shift(frame, pose);
+                }
+                files.write(i, r.render(frame, pose));
                 progress.frameDone(true);
             }
         }

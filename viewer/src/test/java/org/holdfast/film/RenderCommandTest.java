@@ -135,6 +135,111 @@ class RenderCommandTest {
         assertArrayEquals(middle, Files.readAllBytes(out.resolve(FrameFiles.name(2))));
     }
 
+    /** A film that follows a member says so in film.json; an unknown member is refused by name. */
+    @Test
+    void aFollowingFilmRecordsItsMemberAndAnUnknownOneIsRefused() throws Exception {
+        String film = """
+                [film]
+                length_s = 1
+                frame_rate = 2
+                frame_px = [32, 18]
+                to_gyr = 2
+                camera = "orbit"
+                follow = "%s"
+                [film.orbit]
+                radius_kpc = 300
+                """;
+        Path out = dir.resolve("frames");
+        Path good = Files.writeString(dir.resolve("follow.toml"), String.format(film, "Bracken"));
+        ViewRun.Result r = FilmRun.render(run(), "--film", good.toString(), "--out", out.toString(), "--quiet");
+        assertEquals(0, r.exitCode(), r.err());
+        assertTrue(Files.readString(out.resolve(FilmManifest.FILE)).contains("\"follow\" : \"Bracken\""));
+        Path wrong = Files.writeString(dir.resolve("wrong.toml"), String.format(film, "Nobody"));
+        assertOneLine(FilmRun.render(run(), "--film", wrong.toString(), "--still", "1", "--out",
+                dir.resolve("never.png").toString()), "wrong.toml", "film.follow", "Nobody", "Bracken");
+        assertFalse(Files.exists(dir.resolve("never.png")));
+    }
+
+    /**
+     * A camera that follows a member is its track moved with that member's centre: a still of an
+     * orbit round the origin following Bracken matches the still of the same orbit centred where
+     * Bracken is then (up to rounding: the two compute the view direction from different sums, so
+     * a few splats can land on the next sub-pixel phase), and differs from the orbit round the origin.
+     */
+    @Test
+    void aFollowingCameraRidesWithItsMember() throws Exception {
+        double t = 1.3;
+        double[] b = new double[3];
+        assertTrue(new org.holdfast.replay.ReplayScene(org.holdfast.replay.RunArchive.open(DemoRun.folder()))
+                .centreOf("Bracken", t, b));
+        String orbit = """
+                [film]
+                length_s = 4
+                frame_rate = 4
+                frame_px = [96, 54]
+                to_gyr = 2
+                camera = "orbit"
+                %s
+                [film.orbit]
+                centre_kpc = [%s, %s, %s]
+                radius_kpc = 300
+                rise_kpc = 100
+                turns = 0.3
+                """;
+        BufferedImage[] shots = new BufferedImage[3];
+        String[][] variants = {{"follow = \"Bracken\"", "0", "0", "0"},
+            {"", Double.toString(b[0]), Double.toString(b[1]), Double.toString(b[2])}, {"", "0", "0", "0"}};
+        for (int k = 0; k < 3; k++) {
+            Path film = Files.writeString(dir.resolve("orbit-" + k + ".toml"),
+                    String.format(java.util.Locale.ROOT, orbit, (Object[]) variants[k]));
+            Path png = dir.resolve("orbit-" + k + ".png");
+            ViewRun.Result r = FilmRun.render(run(), "--film", film.toString(), "--still", Double.toString(t), "--out",
+                    png.toString(), "--quiet");
+            assertEquals(0, r.exitCode(), r.err());
+            shots[k] = FilmRun.image(png);
+        }
+        int pixels = 96 * 54;
+        assertTrue(differing(shots[0], shots[1]) < pixels / 100, "following = centred on the member");
+        assertTrue(differing(shots[0], shots[2]) > pixels / 20, "following differs from circling the origin");
+    }
+
+    /** Pixels whose channels differ by more than 8 levels. */
+    private static int differing(BufferedImage a, BufferedImage b) {
+        int n = 0;
+        for (int y = 0; y < a.getHeight(); y++) {
+            for (int x = 0; x < a.getWidth(); x++) {
+                int p = a.getRGB(x, y);
+                int q = b.getRGB(x, y);
+                for (int shift = 0; shift < 24; shift += 8) {
+                    if (Math.abs(((p >> shift) & 0xFF) - ((q >> shift) & 0xFF)) > 8) {
+                        n++;
+                        break;
+                    }
+                }
+            }
+        }
+        return n;
+    }
+
+    /**
+     * The default film of a run that stopped before a big rip counts down to it riding with the
+     * first member: at the end the members are far apart, and the centre of mass far from each.
+     */
+    @Test
+    void theDefaultCountdownRidesWithTheFirstMember() throws Exception {
+        Path run = dir.resolve("rip-run");
+        ViewRun.Result e = ViewRun.run(org.holdfast.window.FrameSources::open, "evolve",
+                Path.of("..", "scenarios", "tethered-pair.toml").toString(), "--set", "cosmology.dark_energy.w0=-1.5",
+                "--out", run.toString(), "--quiet");
+        assertEquals(0, e.exitCode(), e.err());
+        Path out = dir.resolve("countdown");
+        ViewRun.Result r = FilmRun.render(run.toString(), "--seconds", "1", "--fps", "4", "--size", "64x36", "--out",
+                out.toString(), "--quiet");
+        assertEquals(0, r.exitCode(), r.err());
+        String manifest = Files.readString(out.resolve(FilmManifest.FILE));
+        assertTrue(manifest.contains("countdown") && manifest.contains("\"follow\" : \"Harl\""), manifest);
+    }
+
     private static String[] concat(String[] a, String[] b) {
         String[] all = java.util.Arrays.copyOf(a, a.length + b.length);
         System.arraycopy(b, 0, all, a.length, b.length);
