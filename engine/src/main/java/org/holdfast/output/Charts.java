@@ -196,14 +196,58 @@ public final class Charts {
             x += p.getWidth();
         }
         g.dispose();
+        write(all, file);
+    }
+
+    /**
+     * Writes the chart with numbered notes in columns beneath it (the chart marks each place
+     * with its number), so that many long labels never cover the data.
+     */
+    public static void savePng(XYChart chart, java.util.List<String> notes, Path file) {
+        labelTicks(chart);
+        java.awt.image.BufferedImage top = BitmapEncoder.getBufferedImage(chart);
+        int columns = 3;
+        int rowPx = 19;
+        int rows = (notes.size() + columns - 1) / columns;
+        int pad = notes.isEmpty() ? 0 : 14;
+        int w = top.getWidth();
+        int h = top.getHeight() + rows * rowPx + 2 * pad;
+        java.awt.image.BufferedImage all = new java.awt.image.BufferedImage(w, h, java.awt.image.BufferedImage.TYPE_INT_RGB);
+        java.awt.Graphics2D g = all.createGraphics();
+        g.setRenderingHint(java.awt.RenderingHints.KEY_TEXT_ANTIALIASING, java.awt.RenderingHints.VALUE_TEXT_ANTIALIAS_ON);
+        g.setColor(Palette.PAPER);
+        g.fillRect(0, 0, w, h);
+        g.drawImage(top, 0, 0, null);
+        g.setFont(TICKS);
+        g.setColor(Palette.INK);
+        int columnPx = (w - 2 * 60) / columns;
+        for (int i = 0; i < notes.size(); i++) {
+            int col = i / Math.max(rows, 1);
+            int row = i % Math.max(rows, 1);
+            g.drawString(notes.get(i), 60 + col * columnPx, top.getHeight() + pad + (row + 1) * rowPx - 5);
+        }
+        g.dispose();
+        write(all, file);
+    }
+
+    /** Writes an image as PNG under a temporary name, then renames it; nothing half-written stays. */
+    private static void write(java.awt.image.BufferedImage image, Path file) {
+        Path dir = file.toAbsolutePath().getParent();
+        Path tmp = dir.resolve(file.getFileName() + ".part");
         try {
-            Path dir = file.toAbsolutePath().getParent();
             Files.createDirectories(dir);
-            Path tmp = dir.resolve(file.getFileName() + ".part");
-            javax.imageio.ImageIO.write(all, "png", tmp.toFile());
+            javax.imageio.ImageIO.write(image, "png", tmp.toFile());
             Files.move(tmp, file, StandardCopyOption.REPLACE_EXISTING);
-        } catch (IOException e) {
-            throw new UncheckedIOException("cannot write " + file, e);
+        } catch (IOException | RuntimeException e) {
+            try {
+                Files.deleteIfExists(tmp);
+            } catch (IOException ignored) {
+                // the first failure is the one to report
+            }
+            if (e instanceof IOException io) {
+                throw new UncheckedIOException("cannot write " + file, io);
+            }
+            throw (RuntimeException) e;
         }
     }
 

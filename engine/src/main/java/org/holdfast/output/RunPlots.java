@@ -86,14 +86,19 @@ public final class RunPlots {
             double[][] thin = Charts.thinForDashes(t, zgShown, tSpan, yLo, yHi, log, PLOT_W, PLOT_H, DASH_MIN_PX);
             Charts.guide(c, "zero-gravity radius of the main group", thin[0], thin[1]);
         }
-        int row = 0;
-        for (RunEvent ev : events) {
+        // Each event: a line marked with its number at the top, and a note beneath the chart.
+        // Numbers of events close in time are stacked in a few rows so that they stay readable.
+        List<String> notes = new ArrayList<>();
+        for (int i = 0; i < events.size(); i++) {
+            RunEvent ev = events.get(i);
             c.addAnnotation(new AnnotationLine(ev.tGyr(), true, false));
-            // Stack the labels downward so that events close in time stay readable.
-            double y = log ? max * Math.pow(0.7, row++ % 12) : max * (0.97 - 0.05 * (row++ % 12));
-            c.addAnnotation(new AnnotationText(ev.kind() + ": " + String.join(", ", ev.members()), ev.tGyr(), y, false));
+            int row = i % 4;
+            double y = log ? max * Math.pow(0.75, row) : max * (0.97 - 0.05 * row);
+            c.addAnnotation(new AnnotationText(Integer.toString(i + 1), ev.tGyr(), y, false));
+            notes.add(String.format(java.util.Locale.ROOT, "%d   t = %.1f Gyr   %s: %s", i + 1, ev.tGyr(), ev.kind(),
+                    String.join(", ", ev.members())));
         }
-        Charts.savePng(c, file);
+        Charts.savePng(c, notes, file);
     }
 
     static void energy(Path file, RunRecorder rec, String title) {

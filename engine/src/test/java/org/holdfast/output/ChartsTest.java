@@ -64,4 +64,38 @@ class ChartsTest {
         }
         assertEquals(1, gaps, "the gap is kept");
     }
+
+    /** Notes go beneath the chart, in three columns, never over it; nothing half-written stays. */
+    @Test
+    void notesAreWrittenBeneathTheChart(@org.junit.jupiter.api.io.TempDir java.nio.file.Path dir) throws Exception {
+        XYChart c = Charts.lines("t", "x", "y", 400, 300);
+        Charts.line(c, "a", new double[] {0, 1, 2}, new double[] {1, 3, 2}, 0);
+        java.nio.file.Path plain = dir.resolve("plain.png");
+        java.nio.file.Path noted = dir.resolve("noted.png");
+        Charts.savePng(c, java.util.List.of(), plain);
+        java.util.List<String> notes = new java.util.ArrayList<>();
+        for (int k = 1; k <= 7; k++) {
+            notes.add(k + "   t = " + k + ".0 Gyr   merged: Tessaly, Vell");
+        }
+        Charts.savePng(c, notes, noted);
+        java.awt.image.BufferedImage a = javax.imageio.ImageIO.read(plain.toFile());
+        java.awt.image.BufferedImage b = javax.imageio.ImageIO.read(noted.toFile());
+        assertEquals(300, a.getHeight(), "no notes, no room for them");
+        assertEquals(300 + 3 * 19 + 2 * 14, b.getHeight(), "seven notes in three columns take three rows");
+        int ink = 0;
+        for (int y = 300; y < b.getHeight(); y++) {
+            for (int x = 0; x < b.getWidth(); x++) {
+                ink += b.getRGB(x, y) != a.getRGB(0, 0) ? 1 : 0;
+            }
+        }
+        assertTrue(ink > 200, "the notes are drawn: " + ink + " pixels of text");
+        for (int y = 0; y < 300; y++) {
+            for (int x = 0; x < 400; x++) {
+                assertEquals(a.getRGB(x, y), b.getRGB(x, y), "the chart itself is unchanged at " + x + "," + y);
+            }
+        }
+        try (var files = java.nio.file.Files.list(dir)) {
+            assertEquals(2, files.count(), "no .part file left");
+        }
+    }
 }
