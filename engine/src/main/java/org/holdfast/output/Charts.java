@@ -9,7 +9,6 @@ import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
 
 import org.knowm.xchart.BitmapEncoder;
-import org.knowm.xchart.BitmapEncoder.BitmapFormat;
 import org.knowm.xchart.XYChart;
 import org.knowm.xchart.XYChartBuilder;
 import org.knowm.xchart.XYSeries;
@@ -253,24 +252,6 @@ public final class Charts {
 
     /** Writes the chart as PNG, to a temporary name first. */
     public static void savePng(XYChart chart, Path file) {
-        Path dir = file.toAbsolutePath().getParent();
-        String stem = file.getFileName().toString().replaceFirst("\\.png$", "");
-        Path part = dir.resolve(stem + ".part.png");
-        labelTicks(chart);
-        try {
-            Files.createDirectories(dir);
-            BitmapEncoder.saveBitmap(chart, dir.resolve(stem + ".part").toString(), BitmapFormat.PNG);
-            Files.move(part, file, StandardCopyOption.REPLACE_EXISTING);
-        } catch (IOException | RuntimeException e) {
-            try {
-                Files.deleteIfExists(part);
-            } catch (IOException ignored) {
-                // the first failure is the one to report
-            }
-            if (e instanceof IOException io) {
-                throw new UncheckedIOException("cannot write " + file, io);
-            }
-            throw (RuntimeException) e;
-        }
+        savePng(chart, java.util.List.of(), file);
     }
 }
