@@ -2,6 +2,10 @@ package org.holdfast.replay;
 
 import java.io.IOException;
 import java.io.Reader;
+import java.io.StringReader;
+import java.nio.channels.Channels;
+import java.nio.channels.SeekableByteChannel;
+import java.nio.charset.StandardCharsets;
 import java.nio.file.DirectoryStream;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -45,6 +49,10 @@ public final class RunArchive {
     private double ripGyr;
     private boolean stoppedBeforeRip;
     private Map<String, double[][]> tracks;
+    /** The rows of tracks.csv read so far, per galaxy, and how many bytes of it they took. */
+    private final Map<String, List<double[]>> trackRows = new LinkedHashMap<>();
+    private long trackBytes;
+    private String[] trackHeader;
     private final Snapshot[] cache = new Snapshot[2];
     private final int[] cached = {-1, -1};
     private int nextSlot;
@@ -79,7 +87,8 @@ public final class RunArchive {
         RunArchive run = new RunArchive(dir, new Path[0], new double[0], names);
         run.addSnapshots(found);
         run.readSummary();
-        run.tracks = readTracks(dir, false);
+        // without its summary the run may still be writing: leave a half-written last row for later
+        run.readTracks(!run.summaryRead);
         return run;
     }
 
@@ -95,11 +104,11 @@ public final class RunArchive {
         boolean more = found.size() > files.length;
         if (more) {
             addSnapshots(found);
-            tracks = readTracks(dir, true);
+            readTracks(true);
         }
         boolean summary = !summaryRead && readSummary();
         if (summary) {
-            tracks = readTracks(dir, false);
+            readTracks(false);
         }
         return more || summary;
     }
@@ -230,33 +239,34 @@ public final class RunArchive {
     static final int TRACK_ROWS = 7;
 
     /**
-     * Saved centre paths per galaxy name: rows t, x, y, z, vx, vy, vz; empty when there is no
-     * tracks.csv.
+     * Reads the rows of tracks.csv written since the last read (each byte of the file is parsed
+     * once, however often a growing run is refreshed) and makes the saved centre paths per galaxy
+     * name: rows t, x, y, z, vx, vy, vz; empty when there is no tracks.csv.
      *
-     * @param growing the file may still be written: stop at the first row that is not whole
+     * @param growing the file may still be written: a last line without its newline waits
      */
-    private static Map<String, double[][]> readTracks(Path dir, boolean growing) {
+    private void readTracks(boolean growing) {
         Path file = dir.resolve(TrackWriter.FILE);
-        Map<String, List<double[]>> rows = new LinkedHashMap<>();
         if (Files.isRegularFile(file)) {
-            CSVFormat f = CSVFormat.DEFAULT.builder().setHeader().setSkipHeaderRecord(true).get();
-            try (Reader r = Files.newBufferedReader(file); CSVParser p = CSVParser.parse(r, f)) {
-                for (CSVRecord rec : p) {
-                    if (growing && !rec.isConsistent()) {
-                        break;
-                    }
-                    rows.computeIfAbsent(rec.get("name"), k -> new ArrayList<>()).add(new double[] {
-                        Double.parseDouble(rec.get("t_gyr")), Double.parseDouble(rec.get("x_kpc")),
-                        Double.parseDouble(rec.get("y_kpc")), Double.parseDouble(rec.get("z_kpc")),
-                        Double.parseDouble(rec.get("vx_kms")), Double.parseDouble(rec.get("vy_kms")),
-                        Double.parseDouble(rec.get("vz_kms"))});
-                }
-            } catch (IOException | RuntimeException e) {
+            byte[] fresh;
+            try (SeekableByteChannel ch = Files.newByteChannel(file)) {
+                ch.position(trackBytes);
+                fresh = Channels.newInputStream(ch).readAllBytes();
+            } catch (IOException e) {
                 throw new ScenarioException(file.toString(), null, "cannot read the tracks: " + e.getMessage());
             }
+            int end = fresh.length;
+            if (growing) {
+                // whole lines only: the row being written now is read next time
+                while (end > 0 && fresh[end - 1] != '\n') {
+                    end--;
+                }
+            }
+            parseTrackRows(file, new String(fresh, 0, end, StandardCharsets.UTF_8));
+            trackBytes += end;
         }
         Map<String, double[][]> out = new LinkedHashMap<>();
-        rows.forEach((name, list) -> {
+        trackRows.forEach((name, list) -> {
             double[][] a = new double[TRACK_ROWS][list.size()];
             for (int k = 0; k < list.size(); k++) {
                 for (int c = 0; c < TRACK_ROWS; c++) {
@@ -265,7 +275,30 @@ public final class RunArchive {
             }
             out.put(name, a);
         });
-        return out;
+        tracks = out;
+    }
+
+    /** Adds the rows in {@code text}, whole lines of tracks.csv; the first read takes the header too. */
+    private void parseTrackRows(Path file, String text) {
+        if (text.isEmpty()) {
+            return;
+        }
+        CSVFormat f = trackHeader == null ? CSVFormat.DEFAULT.builder().setHeader().setSkipHeaderRecord(true).get()
+                : CSVFormat.DEFAULT.builder().setHeader(trackHeader).get();
+        try (Reader r = new StringReader(text); CSVParser p = CSVParser.parse(r, f)) {
+            if (trackHeader == null) {
+                trackHeader = p.getHeaderNames().toArray(String[]::new);
+            }
+            for (CSVRecord rec : p) {
+                trackRows.computeIfAbsent(rec.get("name"), k -> new ArrayList<>()).add(new double[] {
+                    Double.parseDouble(rec.get("t_gyr")), Double.parseDouble(rec.get("x_kpc")),
+                    Double.parseDouble(rec.get("y_kpc")), Double.parseDouble(rec.get("z_kpc")),
+                    Double.parseDouble(rec.get("vx_kms")), Double.parseDouble(rec.get("vy_kms")),
+                    Double.parseDouble(rec.get("vz_kms"))});
+            }
+        } catch (IOException | RuntimeException e) {
+            throw new ScenarioException(file.toString(), null, "cannot read the tracks: " + e.getMessage());
+        }
     }
 
     public Path dir() {

@@ -73,6 +73,11 @@ public final class RunFrameSource implements FrameSource {
         }
     }
 
+    /** The run folder as read so far. */
+    RunArchive archive() {
+        return scene.run();
+    }
+
     private static double[] eventTimes(RunArchive run) {
         return run.events().stream().mapToDouble(FateEvent::tGyr).sorted().toArray();
     }
