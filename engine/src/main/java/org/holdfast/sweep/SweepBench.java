@@ -31,7 +31,7 @@ public final class SweepBench implements BenchSuite {
         }
 
         @Override
-        public RunOutcome run(Path scenario, Overrides overrides, long seed, boolean sample, double untilGyr,
+        public RunOutcome run(Path scenario, Overrides overrides, long seed, long draw, boolean sample, double untilGyr,
                 Path snapshotDir) {
             double x = seed & 0xFFFF;
             for (long i = 0; i < iterations; i++) {
@@ -92,7 +92,7 @@ public final class SweepBench implements BenchSuite {
         BurnRunFunction f = new BurnRunFunction(iterations);
         Runnable work = () -> {
             for (int i = 0; i < runs; i++) {
-                f.run(null, null, i, false, Double.NaN, null);
+                f.run(null, null, i, 0, false, Double.NaN, null);
             }
         };
         long t0 = System.nanoTime();
@@ -113,10 +113,10 @@ public final class SweepBench implements BenchSuite {
     static long calibrate(double seconds) {
         BurnRunFunction probe = new BurnRunFunction(2_000_000);
         for (int i = 0; i < 5; i++) {
-            probe.run(null, null, 1, false, Double.NaN, null);
+            probe.run(null, null, 1, 0, false, Double.NaN, null);
         }
         long t0 = System.nanoTime();
-        probe.run(null, null, 1, false, Double.NaN, null);
+        probe.run(null, null, 1, 0, false, Double.NaN, null);
         double s = (System.nanoTime() - t0) * 1e-9;
         return Math.max(1000, (long) (2_000_000 * seconds / s));
     }

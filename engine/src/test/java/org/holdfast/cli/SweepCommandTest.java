@@ -59,21 +59,46 @@ class SweepCommandTest {
         assertEquals(0, r.exitCode(), r.err());
         List<List<String>> rows = SweepFiles.rows(tmp.resolve("a/results.csv"));
         assertEquals(1 + 5 * 4, rows.size());
-        assertEquals(List.of("point", "sample", "seed", "cosmology.dark_energy.w0", "toy.w_noise", "verdict",
-                "bound_until_gyr", "Orrimal.fate", "Orrimal.at_gyr", "Orrimal.with", "Vesk.fate", "Vesk.at_gyr",
-                "Vesk.with", "Tupala.fate", "Tupala.at_gyr", "Tupala.with", "energy_budget_error", "wall_s"), rows.get(0));
-        Set<String> seeds = new HashSet<>();
+        List<String> header = new ArrayList<>(List.of("point", "sample", "seed", "cosmology.dark_energy.w0",
+                "toy.w_noise", "verdict", "bound_until_gyr"));
+        for (String m : List.of("Orrimal", "Vesk", "Tupala")) {
+            for (String c : List.of("fate", "at_gyr", "left_gyr", "with", "together", "group", "bound_at_start")) {
+                header.add(m + "." + c);
+            }
+        }
+        header.addAll(List.of("energy_budget_error", "wall_s"));
+        assertEquals(header, rows.get(0));
+        Set<String> draws = new HashSet<>();
         for (int i = 1; i < rows.size(); i++) {
             List<String> row = rows.get(i);
             int point = Integer.parseInt(row.get(0));
             int sample = Integer.parseInt(row.get(1));
             assertEquals((i - 1) / 4, point, "rows sorted by point");
             assertEquals((i - 1) % 4, sample, "then by sample");
-            assertEquals(SeedPlan.seedOf(42, point, sample), Long.parseLong(row.get(2)));
+            assertEquals(42, Long.parseLong(row.get(2)), "paired draws: draw s of the master seed at every point");
             assertEquals(-1.3 + 0.1 * point, Double.parseDouble(row.get(3)), 1e-12);
-            seeds.add(row.get(2));
+            // Paired draws, visible in the table: sample s drew the same value at every grid point.
+            assertEquals(rows.get(1 + sample).get(4), row.get(4), "row " + i);
+            draws.add(row.get(4));
         }
-        assertEquals(5 * 4, seeds.size(), "every run has its own seed");
+        assertEquals(4, draws.size(), "four different draws, each the same at all five points");
+    }
+
+    @Test
+    void independentDrawsDifferBetweenGridPoints() throws IOException {
+        CommandRunner.Result r = sweep("ind", "--draws", "independent");
+        assertEquals(0, r.exitCode(), r.err());
+        List<List<String>> rows = SweepFiles.rows(tmp.resolve("ind/results.csv"));
+        Set<String> draws = new HashSet<>();
+        for (int i = 1; i < rows.size(); i++) {
+            List<String> row = rows.get(i);
+            assertEquals(SeedPlan.seedOf(42, Integer.parseInt(row.get(0)), Integer.parseInt(row.get(1))),
+                    Long.parseLong(row.get(2)));
+            draws.add(row.get(4));
+        }
+        assertEquals(20, draws.size(), "every run draws afresh");
+        assertBadInput("--draws: sometimes: choose paired or independent", "sweep", scenario.toString(), "--out",
+                tmp.resolve("bad-draws").toString(), "--draws", "sometimes");
     }
 
     @Test
@@ -98,10 +123,12 @@ class SweepCommandTest {
         }
         assertEquals(0.0, first);
         assertEquals(1.0, last);
-        assertTrue(Files.size(tmp.resolve("f/bound-fraction.png")) > 1000);
-        byte[] png = Files.readAllBytes(tmp.resolve("f/bound-fraction.png"));
-        assertEquals((byte) 0x89, png[0]);
-        assertEquals('P', png[1]);
+        for (String picture : List.of("fractions.png", "fate-times.png")) {
+            assertTrue(Files.size(tmp.resolve("f/" + picture)) > 1000, picture);
+            byte[] png = Files.readAllBytes(tmp.resolve("f/" + picture));
+            assertEquals((byte) 0x89, png[0]);
+            assertEquals('P', png[1]);
+        }
     }
 
     @Test
@@ -185,7 +212,7 @@ class SweepCommandTest {
                 "--workers", "2");
         assertEquals(0, r.exitCode(), r.err());
         assertEquals(1 + 12, SweepFiles.rows(tmp.resolve("map/results.csv")).size());
-        assertTrue(Files.size(tmp.resolve("map/bound-map.png")) > 1000);
+        assertTrue(Files.size(tmp.resolve("map/map.png")) > 1000);
     }
 
     private void assertBadInput(String expected, String... args) {
