@@ -183,9 +183,8 @@ public final class Overrides {
         }
         TomlParseResult r = Toml.parse("value = " + t);
         if (r.hasErrors() || !(r.get("value") instanceof TomlTable table)) {
-            String why = r.hasErrors() ? r.errors().get(0).getMessage() : "not a table";
             throw new ScenarioException(optionOf(dottedKey), dottedKey, "expected a number or an inline table such as"
-                    + " { median = 1.2e12, sigma_dex = 0.2 }, got '" + t + "' (" + why + ")");
+                    + " { median = 1.2e12, sigma_dex = 0.2 }, got '" + t + "'");
         }
         return table;
     }

@@ -160,6 +160,81 @@ class SweepCommandTest {
         assertTrue(again.out().contains("0 made now, 20 already done"), again.out());
     }
 
+    /**
+     * A sweep-merge stopped at any point leaves a folder the same command finishes: empty but for
+     * a temporary file, the plan alone, the plan and journal without tables, or a finished merge.
+     */
+    @Test
+    void aMergeStoppedPartWayIsFinishedByTheSameCommand() throws IOException {
+        assertEquals(0, sweep("whole", "--pair", "Vesk,Tupala").exitCode());
+        List<String> merge = new ArrayList<>(List.of("sweep-merge"));
+        for (int i = 1; i <= 2; i++) {
+            assertEquals(0, sweep("p" + i, "--shard", i + "/2", "--pair", "Vesk,Tupala").exitCode());
+            merge.add(tmp.resolve("p" + i).toString());
+        }
+        Path m = tmp.resolve("m");
+        merge.addAll(List.of("--out", m.toString()));
+        String[] cmd = merge.toArray(String[]::new);
+        Files.createDirectories(m);
+        Files.writeString(m.resolve("sweep.json.tmp"), "{ half a pl");
+        CommandRunner.Result first = CommandRunner.run(cmd);
+        assertEquals(0, first.exitCode(), first.err());
+        List<String> expected = SweepFiles.resultsWithoutWall(tmp.resolve("whole"));
+        String fractions = Files.readString(tmp.resolve("whole/fractions.csv"));
+        assertTrue(fractions.contains(",pair,Vesk+Tupala,together,"), "the shards' pairs are counted");
+        assertEquals(expected, SweepFiles.resultsWithoutWall(m));
+        // killed after the plan, before the journal and the tables
+        Files.delete(m.resolve("runs.jsonl"));
+        Files.delete(m.resolve("results.csv"));
+        Files.delete(m.resolve("fractions.csv"));
+        CommandRunner.Result again = CommandRunner.run(cmd);
+        assertEquals(0, again.exitCode(), again.err());
+        assertEquals(expected, SweepFiles.resultsWithoutWall(m));
+        assertEquals(fractions, Files.readString(m.resolve("fractions.csv")));
+        // killed after the journal, before the tables; and a finished merge run once more
+        Files.delete(m.resolve("results.csv"));
+        assertEquals(0, CommandRunner.run(cmd).exitCode());
+        assertEquals(0, CommandRunner.run(cmd).exitCode());
+        assertEquals(expected, SweepFiles.resultsWithoutWall(m));
+        // a folder that holds another sweep is still refused
+        assertEquals(0, CommandRunner.run("sweep", scenario.toString(), "--out", tmp.resolve("x-other").toString(),
+                "--vary", "cosmology.dark_energy.w0=-1.2,-1.0").exitCode());
+        assertBadInput("--out: " + tmp.resolve("x-other") + ": already holds a different sweep", cmd[0], cmd[1],
+                cmd[2], "--out", tmp.resolve("x-other").toString());
+    }
+
+    @Test
+    void pairsAndTogetherAreCountedSymmetricallyAndUnknownNamesGetASuggestion() throws IOException {
+        assertEquals(0, sweep("ab", "--pair", "Vesk,Tupala").exitCode());
+        assertEquals(0, sweep("ba", "--pair", "Tupala,Vesk").exitCode());
+        List<List<String>> ab = SweepFiles.rows(tmp.resolve("ab/fractions.csv"));
+        List<List<String>> ba = SweepFiles.rows(tmp.resolve("ba/fractions.csv"));
+        int pairs = 0;
+        for (int i = 1; i < ab.size(); i++) {
+            if (ab.get(i).get(2).equals("pair")) {
+                assertEquals("Vesk+Tupala", ab.get(i).get(3));
+                assertEquals("Tupala+Vesk", ba.get(i).get(3));
+                assertEquals(ab.get(i).subList(4, 10), ba.get(i).subList(4, 10), "symmetric in A and B");
+                pairs++;
+            } else {
+                assertEquals(ab.get(i), ba.get(i));
+            }
+        }
+        assertEquals(5, pairs, "one pair row per grid point");
+        assertTrue(ab.stream().anyMatch(r -> r.get(3).equals("Tupala") && r.get(4).equals("together")));
+        assertBadInput("--pair: Vesc: no such member (did you mean 'Vesk'?)", "sweep", scenario.toString(), "--out",
+                tmp.resolve("bad-pair").toString(), "--pair", "Vesc,Tupala");
+        assertBadInput("--pair: Vesk,Vesk: names the same member twice", "sweep", scenario.toString(), "--out",
+                tmp.resolve("bad-pair").toString(), "--pair", "Vesk,Vesk");
+        assertBadInput("--vary: galaxy.Vesc.mass_msun: no such key in this scenario (did you mean "
+                + "'galaxy.Vesk.mass_msun'?)", "sweep", scenario.toString(), "--out", tmp.resolve("bad-pair").toString(),
+                "--vary", "galaxy.Vesc.mass_msun=1e10,1e11");
+        assertBadInput("--set: galaxy.Tupalla.mass_msun: no such key in this scenario (did you mean "
+                + "'galaxy.Tupala.mass_msun'?)", "sweep", scenario.toString(), "--out", tmp.resolve("bad-pair").toString(),
+                "--set", "galaxy.Tupalla.mass_msun=1e10");
+        assertFalse(Files.exists(tmp.resolve("bad-pair")), "nothing written");
+    }
+
     @Test
     void mergeRefusesMissingShardsAndOtherSweeps() {
         assertEquals(0, sweep("s1", "--shard", "1/2").exitCode());
