@@ -55,8 +55,8 @@ import picocli.CommandLine.Model.CommandSpec;
             "      --vary cosmology.dark_energy.w0=-2.0:-1.0 \\",
             "      --member Wrenna --fate ripped --within-gyr 60 --tolerance 0.001",
             "  holdfast threshold scenarios/tethered-pair.toml \\",
-            "      --vary cosmology.dark_energy.w0=-2.0:-1.0 --along cosmology.dark_energy.wa=-0.4:0.4:5 \\",
-            "      --member Wrenna --fate ripped --within-gyr 60 --tolerance 0.002 --out rip-curve"
+            "      --vary cosmology.dark_energy.w0=-2.0:-0.4 --along cosmology.dark_energy.wa=0:0.15:4 \\",
+            "      --member Wrenna --fate ripped --within-gyr 60 --tolerance 0.01 --out rip-curve"
         })
 public final class ThresholdCommand implements Callable<Integer> {
 

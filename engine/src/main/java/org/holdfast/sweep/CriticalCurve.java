@@ -82,8 +82,9 @@ public final class CriticalCurve {
     }
 
     static XYChart chart(String key, String alongKey, String what, int samples, List<Point> points) {
-        XYChart chart = Charts.lines("Critical curve: " + what + " in half of " + samples
-                + (samples == 1 ? " run" : " runs"), SweepPlots.label(key), SweepPlots.label(alongKey), 1000, 640);
+        String title = samples == 1 ? "Critical curve: " + what + " (one run per value)"
+                : "Critical curve: " + what + " in half of " + samples + " paired draws";
+        XYChart chart = Charts.lines(title, SweepPlots.label(key), SweepPlots.label(alongKey), 1000, 640);
         chart.getStyler().setMarkerSize(9);
         List<double[]> found = new ArrayList<>();
         for (Point p : points) {

@@ -5,7 +5,6 @@ import java.io.StringWriter;
 import java.util.ArrayList;
 import java.util.LinkedHashSet;
 import java.util.List;
-import java.util.Locale;
 import java.util.Set;
 import java.util.function.Predicate;
 
@@ -119,7 +118,8 @@ public final class Fractions {
         return w.toString();
     }
 
-    private static String fmt(double v) {
-        return String.format(Locale.ROOT, "%.6f", v);
+    /** Six decimals, as {@code String.format("%.6f")} writes them (half up on the shortest decimal form), faster. */
+    static String fmt(double v) {
+        return java.math.BigDecimal.valueOf(v).setScale(6, java.math.RoundingMode.HALF_UP).toPlainString();
     }
 }

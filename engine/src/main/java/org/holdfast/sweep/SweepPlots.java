@@ -20,8 +20,8 @@ import org.knowm.xchart.style.markers.SeriesMarkers;
  *
  * <p>With one varied key: {@code fractions.png}, the fraction of runs in which each member
  * ends together with the group, each named pair stays together, and the group stays bound,
- * every line with its 95% Wilson band (the group's line drawn last, dark and thick, above the
- * members'); and {@code fate-times.png}, a strip plot of the time of every member's fate
+ * every point with its 95% Wilson interval as a bar (curves shifted a little sideways so that
+ * coinciding ones stay visible; the group's drawn last, dark and thick, above the members'); and {@code fate-times.png}, a strip plot of the time of every member's fate
  * (at_gyr) at each grid point, one colour per fate. With two: {@code map.png}
  * ({@link MapPlot}), the chosen outcome's fraction over both keys with its 50% contour. With
  * more keys there is no picture (slice {@code fractions.csv}).
@@ -83,7 +83,7 @@ public final class SweepPlots {
     static List<Curve> curves(SweepPlan plan, List<Fractions.Row> rows) {
         int n = plan.axes().get(0).size();
         Map<String, Curve> byName = new LinkedHashMap<>();
-        Curve group = new Curve("whole group stays bound", n);
+        Curve group = new Curve("group stays bound (members bound at the start)", n);
         for (Fractions.Row r : rows) {
             Curve c = null;
             if (r.level().equals("member") && r.outcome().equals(MemberFate.TOGETHER)) {
@@ -108,7 +108,7 @@ public final class SweepPlots {
     static XYChart lineChart(SweepPlan plan, List<Fractions.Row> rows) {
         Axis axis = plan.axes().get(0);
         long runs = rows.isEmpty() ? 0 : rows.get(0).runs();
-        XYChart chart = Charts.lines("Who holds together (" + runs + " runs per value; bands: 95% Wilson)",
+        XYChart chart = Charts.lines("Who holds together (" + runs + " runs per value; bars: 95% Wilson intervals)",
                 label(axis.key()), "fraction of runs", 1000, 620);
         var s = chart.getStyler();
         s.setYAxisMin(-0.02);
@@ -116,23 +116,43 @@ public final class SweepPlots {
         s.setMarkerSize(7);
         double[] x = axis.values().stream().mapToDouble(Double::doubleValue).toArray();
         List<Curve> curves = curves(plan, rows);
-        // bands first, so that every line is drawn over every band; the group's last of all
+        // Curves often coincide (a host and its satellite, a pair of them): each is shifted a
+        // little sideways, so that every line and every interval stays visible.
+        double step = axis.size() > 1 ? minStep(axis) : 1.0;
+        double spread = Math.min(0.5, 0.04 * curves.size()) * step;
+        // interval bars first, so that every line is drawn over every bar; the group's last of all
         for (int c = 0; c < curves.size(); c++) {
             Curve cv = curves.get(c);
             boolean isGroup = c == curves.size() - 1;
             Color col = isGroup ? GROUP : Palette.member(c);
-            XYSeries band = chart.addSeries(cv.name() + " band", polygonX(x), polygonY(cv.low(), cv.high()));
-            band.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.PolygonArea);
-            band.setFillColor(new Color(col.getRed(), col.getGreen(), col.getBlue(), isGroup ? 46 : 34));
-            band.setLineColor(new Color(0, 0, 0, 0));
-            band.setMarker(SeriesMarkers.NONE);
-            band.setShowInLegend(false);
+            double dx = offset(c, curves.size(), spread);
+            // one series per curve: vertical bars, separated by gaps (NaN)
+            double[] bx = new double[3 * x.length];
+            double[] by = new double[3 * x.length];
+            for (int i = 0; i < x.length; i++) {
+                bx[3 * i] = x[i] + dx;
+                bx[3 * i + 1] = x[i] + dx;
+                bx[3 * i + 2] = x[i] + dx;
+                by[3 * i] = cv.low()[i];
+                by[3 * i + 1] = cv.high()[i];
+                by[3 * i + 2] = Double.NaN;
+            }
+            XYSeries bar = chart.addSeries(cv.name() + " 95%", bx, by);
+            bar.setLineColor(new Color(col.getRed(), col.getGreen(), col.getBlue(), isGroup ? 200 : 150));
+            bar.setLineStyle(new BasicStroke(isGroup ? 3.0f : 1.8f));
+            bar.setMarker(SeriesMarkers.NONE);
+            bar.setShowInLegend(false);
         }
         for (int c = 0; c < curves.size(); c++) {
             Curve cv = curves.get(c);
             boolean isGroup = c == curves.size() - 1;
             Color col = isGroup ? GROUP : Palette.member(c);
-            XYSeries line = chart.addSeries(cv.name(), x, cv.y());
+            double dx = offset(c, curves.size(), spread);
+            double[] xs = new double[x.length];
+            for (int i = 0; i < x.length; i++) {
+                xs[i] = x[i] + dx;
+            }
+            XYSeries line = chart.addSeries(cv.name(), xs, cv.y());
             line.setLineColor(col);
             line.setMarkerColor(col);
             line.setMarker(isGroup ? SeriesMarkers.DIAMOND : SeriesMarkers.CIRCLE);
@@ -141,24 +161,9 @@ public final class SweepPlots {
         return chart;
     }
 
-    /** x of a band's polygon: along the values, then back. */
-    static double[] polygonX(double[] x) {
-        double[] p = new double[2 * x.length];
-        for (int i = 0; i < x.length; i++) {
-            p[i] = x[i];
-            p[2 * x.length - 1 - i] = x[i];
-        }
-        return p;
-    }
-
-    /** y of a band's polygon: the upper ends along, the lower ends back. */
-    static double[] polygonY(double[] low, double[] high) {
-        double[] p = new double[2 * low.length];
-        for (int i = 0; i < low.length; i++) {
-            p[i] = high[i];
-            p[2 * low.length - 1 - i] = low[i];
-        }
-        return p;
+    /** The sideways shift of curve c of n: spread evenly over [-spread/2, spread/2]. */
+    static double offset(int c, int n, double spread) {
+        return n == 1 ? 0 : (c / (double) (n - 1) - 0.5) * spread;
     }
 
     /**

@@ -23,6 +23,12 @@ public final class Wilson {
 
     private static final WilsonScoreInterval SCORE = new WilsonScoreInterval();
 
+    /**
+     * 95% intervals already computed, by (n, k): a sweep asks for the same few counts thousands of
+     * times, and each call of Commons Math builds a normal distribution to find z.
+     */
+    private static final java.util.Map<Long, double[]> CACHE95 = new java.util.concurrent.ConcurrentHashMap<>();
+
     private Wilson() {
     }
 
@@ -43,6 +49,12 @@ public final class Wilson {
 
     /** The 95% interval. */
     public static double[] interval95(long k, long n) {
-        return interval(k, n, LEVEL);
+        if (n <= 0 || k < 0 || k > n || n > Integer.MAX_VALUE) {
+            return interval(k, n, LEVEL); // the same check, the same message
+        }
+        if (CACHE95.size() > 100_000) {
+            CACHE95.clear();
+        }
+        return CACHE95.computeIfAbsent((n << 32) | k, key -> interval(k, n, LEVEL)).clone();
     }
 }

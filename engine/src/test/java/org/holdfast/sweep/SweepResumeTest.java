@@ -118,6 +118,53 @@ class SweepResumeTest {
         assertEquals(54 - saved, Files.readAllLines(tmp.resolve("calls-int-2.txt")).size());
     }
 
+    /**
+     * sweep-merge killed (SIGKILL) at seeded random moments, again and again into the same folder,
+     * then run to the end: the same command always finishes it, and the result equals the sweep
+     * made whole.
+     */
+    @Test
+    void aMergeKilledAtRandomMomentsIsFinishedByTheSameCommand() throws Exception {
+        Path scenario = ToyRunFunction.writeScenario(tmp);
+        RunFunctions.install(new ToyRunFunction());
+        List<String> merge = new ArrayList<>(List.of("sweep-merge"));
+        Path whole = tmp.resolve("whole");
+        try {
+            List<String> base = command(scenario, whole, tmp.resolve("unused"));
+            List<String> args = new ArrayList<>(base.subList(7, base.size()));
+            assertEquals(0, CommandRunner.run(args.toArray(String[]::new)).exitCode());
+            for (int i = 1; i <= 3; i++) {
+                List<String> shard = new ArrayList<>(args);
+                shard.set(shard.indexOf("--out") + 1, tmp.resolve("shard" + i).toString());
+                shard.addAll(List.of("--shard", i + "/3"));
+                assertEquals(0, CommandRunner.run(shard.toArray(String[]::new)).exitCode());
+                merge.add(tmp.resolve("shard" + i).toString());
+            }
+        } finally {
+            RunFunctions.install(null);
+        }
+        Path out = tmp.resolve("merged");
+        merge.addAll(List.of("--out", out.toString()));
+        String java = Path.of(System.getProperty("java.home"), "bin", "java").toString();
+        List<String> cmd = new ArrayList<>(List.of(java, "-Xmx256m", "-cp", System.getProperty("java.class.path"),
+                ToySweepMain.class.getName(), "0", tmp.resolve("merge-calls").toString()));
+        cmd.addAll(merge);
+        java.util.Random random = new java.util.Random(18);
+        for (int round = 0; round < 4; round++) {
+            Process p = new ProcessBuilder(cmd).redirectErrorStream(true)
+                    .redirectOutput(tmp.resolve("merge-" + round + ".log").toFile()).start();
+            Thread.sleep(300 + random.nextInt(1500));
+            p.destroyForcibly();
+            assertTrue(p.waitFor(30, TimeUnit.SECONDS));
+        }
+        Process last = new ProcessBuilder(cmd).redirectErrorStream(true)
+                .redirectOutput(tmp.resolve("merge-last.log").toFile()).start();
+        assertTrue(last.waitFor(120, TimeUnit.SECONDS));
+        assertEquals(0, last.exitValue(), Files.readString(tmp.resolve("merge-last.log")));
+        assertEquals(SweepFiles.resultsWithoutWall(whole), SweepFiles.resultsWithoutWall(out));
+        assertEquals(Files.readString(whole.resolve(Fractions.FILE)), Files.readString(out.resolve(Fractions.FILE)));
+    }
+
     private static long lines(Path f) throws IOException {
         if (!Files.exists(f)) {
             return 0;
