@@ -202,7 +202,18 @@ public final class ThresholdCommand implements Callable<Integer> {
             this.varied.addAll(more.keySet());
         }
 
+        private final Map<Double, Double> known = new java.util.HashMap<>();
+
         double fractionAt(double x) {
+            Double f = known.get(x);
+            if (f == null) {
+                f = evaluate(x);
+                known.put(x, f);
+            }
+            return f;
+        }
+
+        private double evaluate(double x) {
             Map<String, String> o = new LinkedHashMap<>(fixed);
             o.put(key, Axis.format(x));
             List<RunTask> tasks = new ArrayList<>();
@@ -260,14 +271,18 @@ public final class ThresholdCommand implements Callable<Integer> {
             CriticalCurve.Point p;
             try {
                 Threshold.Result r = Threshold.find(eval::fractionAt, lo, hi, tol, maxEvaluations);
+                double[] ci = medianInterval(eval, lo, hi, tol, n);
                 p = new CriticalCurve.Point(a, true, r.value(), r.low(), r.high(), r.evaluations().get(r.low()),
-                        r.evaluations().get(r.high()), eval.runs);
+                        r.evaluations().get(r.high()), eval.runs, ci[0], ci[1]);
             } catch (Threshold.NoChangeException e) {
-                p = new CriticalCurve.Point(a, false, Double.NaN, lo, hi, e.fractionAtLow(), e.fractionAtHigh(), eval.runs);
+                p = new CriticalCurve.Point(a, false, Double.NaN, lo, hi, e.fractionAtLow(), e.fractionAtHigh(), eval.runs,
+                        Double.NaN, Double.NaN);
             }
             points.add(p);
             o.printf(Locale.ROOT, "  %s = %-10s %s%n", alongAxis.key(), Axis.format(a), p.found()
-                    ? String.format(Locale.ROOT, "%s = %.6g  [%.6g, %.6g]", key, p.value(), p.low(), p.high())
+                    ? String.format(Locale.ROOT, "%s = %.6g  bracket [%.6g, %.6g]%s", key, p.value(), p.low(), p.high(),
+                            Double.isNaN(p.ciLow()) ? "" : String.format(Locale.ROOT, "  median 95%% [%.6g, %.6g]",
+                                    p.ciLow(), p.ciHigh()))
                     : "no change between " + Axis.format(lo) + " and " + Axis.format(hi));
             o.flush();
         }
@@ -278,6 +293,27 @@ public final class ThresholdCommand implements Callable<Integer> {
         }
         o.flush();
         return 0;
+    }
+
+    /**
+     * A 95% interval for the median draw's critical value (6 paired draws or more): where f crosses
+     * the two levels of {@link Threshold#medianLevels95}; NaN ends otherwise, or where a level is
+     * not crossed inside the range.
+     */
+    private double[] medianInterval(Evaluator eval, double lo, double hi, double tol, int n) {
+        double[] levels = Threshold.medianLevels95(n);
+        if (levels == null) {
+            return new double[] {Double.NaN, Double.NaN};
+        }
+        double[] x = new double[2];
+        for (int i = 0; i < 2; i++) {
+            try {
+                x[i] = Threshold.find(eval::fractionAt, lo, hi, tol, maxEvaluations, levels[i]).value();
+            } catch (Threshold.NoChangeException e) {
+                return new double[] {Double.NaN, Double.NaN};
+            }
+        }
+        return new double[] {Math.min(x[0], x[1]), Math.max(x[0], x[1])};
     }
 
     private static String baseName(Path p) {

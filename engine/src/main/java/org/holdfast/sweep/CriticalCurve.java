@@ -20,8 +20,10 @@ import org.knowm.xchart.style.markers.SeriesMarkers;
 /**
  * A critical curve in the plane of two keys: for each value of the second key ("along"), the
  * value of the first at which the outcome's fraction crosses one half, found by
- * {@link Threshold}, with the bracket that holds it. Written as {@code critical-curve.csv} and
- * drawn as {@code critical-curve.png} (points with the bracket as a horizontal bar).
+ * {@link Threshold}, with the bracket that holds it and, with 6 paired draws or more, a 95%
+ * confidence interval for the median draw's critical value. Written as
+ * {@code critical-curve.csv} and drawn as {@code critical-curve.png} (points with the interval,
+ * or the bracket, as a horizontal bar).
  */
 public final class CriticalCurve {
 
@@ -43,9 +45,12 @@ public final class CriticalCurve {
      *     low end when not found)
      * @param fractionAtHigh the same at the upper end
      * @param runs the runs made for this point
+     * @param ciLow with paired draws (6 or more), the lower end of a 95% confidence interval for the
+     *     median of the draws' own critical values ({@link Threshold#medianLevels95}); NaN otherwise
+     * @param ciHigh its upper end
      */
     public record Point(double along, boolean found, double value, double low, double high, double fractionAtLow,
-            double fractionAtHigh, int runs) {
+            double fractionAtHigh, int runs, double ciLow, double ciHigh) {
     }
 
     private CriticalCurve() {
@@ -56,11 +61,13 @@ public final class CriticalCurve {
         StringWriter w = new StringWriter();
         try (CSVPrinter p = new CSVPrinter(w, ResultsTable.CSV)) {
             p.printRecord(alongKey, "found", key, key + ".bracket_low", key + ".bracket_high", "fraction_at_bracket_low",
-                    "fraction_at_bracket_high", "samples", "runs");
+                    "fraction_at_bracket_high", key + ".median_ci95_low", key + ".median_ci95_high", "samples", "runs");
             for (Point pt : points) {
                 p.printRecord(Double.toString(pt.along()), Boolean.toString(pt.found()),
                         pt.found() ? Double.toString(pt.value()) : "", Double.toString(pt.low()),
                         Double.toString(pt.high()), fmt(pt.fractionAtLow()), fmt(pt.fractionAtHigh()),
+                        Double.isNaN(pt.ciLow()) ? "" : Double.toString(pt.ciLow()),
+                        Double.isNaN(pt.ciHigh()) ? "" : Double.toString(pt.ciHigh()),
                         Integer.toString(samples), Integer.toString(pt.runs()));
             }
         }
@@ -90,6 +97,14 @@ public final class CriticalCurve {
         for (Point p : points) {
             if (p.found()) {
                 found.add(new double[] {p.value(), p.along()});
+                if (!Double.isNaN(p.ciLow()) && !Double.isNaN(p.ciHigh())) {
+                    XYSeries ci = chart.addSeries("95% " + p.along(), new double[] {p.ciLow(), p.ciHigh()},
+                            new double[] {p.along(), p.along()});
+                    ci.setLineColor(new Color(0xC9, 0x47, 0x3B, 140));
+                    ci.setLineStyle(new BasicStroke(6f));
+                    ci.setMarker(SeriesMarkers.NONE);
+                    ci.setShowInLegend(false);
+                }
                 // the bracket: a short horizontal bar through the point
                 XYSeries bar = chart.addSeries("bracket " + p.along(), new double[] {p.low(), p.high()},
                         new double[] {p.along(), p.along()});
@@ -104,7 +119,8 @@ public final class CriticalCurve {
             none.setMarker(SeriesMarkers.NONE);
             return chart;
         }
-        XYSeries s = chart.addSeries("critical value (bars: bracket)", found.stream().mapToDouble(p -> p[0]).toArray(),
+        XYSeries s = chart.addSeries(samples >= 6 ? "critical value (bars: 95% interval of the median draw)"
+                : "critical value (bars: bracket)", found.stream().mapToDouble(p -> p[0]).toArray(),
                 found.stream().mapToDouble(p -> p[1]).toArray());
         s.setLineColor(Palette.INK);
         s.setMarkerColor(new Color(0xC9473B));

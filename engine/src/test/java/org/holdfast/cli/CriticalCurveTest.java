@@ -100,7 +100,8 @@ class CriticalCurveTest {
         List<List<String>> rows = SweepFiles.rows(out.resolve("critical-curve.csv"));
         assertEquals(List.of("cosmology.dark_energy.wa", "found", "cosmology.dark_energy.w0",
                 "cosmology.dark_energy.w0.bracket_low", "cosmology.dark_energy.w0.bracket_high",
-                "fraction_at_bracket_low", "fraction_at_bracket_high", "samples", "runs"), rows.get(0));
+                "fraction_at_bracket_low", "fraction_at_bracket_high", "cosmology.dark_energy.w0.median_ci95_low",
+                "cosmology.dark_energy.w0.median_ci95_high", "samples", "runs"), rows.get(0));
         assertEquals(4, rows.size());
         double previous = Double.NEGATIVE_INFINITY;
         StringBuilder report = new StringBuilder();

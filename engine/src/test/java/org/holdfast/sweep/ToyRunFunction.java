@@ -55,6 +55,12 @@ public final class ToyRunFunction implements RunFunction {
         return -1 - 0.1 * Math.log10(massMsun / 1e10);
     }
 
+    /** The toy's noise on w for a seed and draw. */
+    public static double noise(long seed, long draw) {
+        return 0.03 * ZigguratSampler.NormalizedGaussian.of(
+                RandomSource.L64_X128_MIX.create(seed ^ (0x9E3779B97F4A7C15L * (draw + 1)))).sample();
+    }
+
     /** The toy's rip time at effective w. */
     public static double ripTimeGyr(double w) {
         return 28.0 / (3 * Math.abs(1 + w));
@@ -76,7 +82,7 @@ public final class ToyRunFunction implements RunFunction {
         double noise = 0;
         Map<String, Double> sampled = new TreeMap<>();
         if (sample) {
-            noise = 0.03 * ZigguratSampler.NormalizedGaussian.of(RandomSource.L64_X128_MIX.create(seed ^ (0x9E3779B97F4A7C15L * (draw + 1)))).sample();
+            noise = noise(seed, draw);
             sampled.put("toy.w_noise", noise);
         }
         double w = w0 + noise;
