@@ -38,15 +38,18 @@ import picocli.CommandLine.Model.CommandSpec;
         header = "Run a scenario over a grid of values and draws; fractions per fate.",
         description = {
             "Runs a scenario over a grid of parameter values (the product of every",
-            "--vary) and, with --samples, over random draws of its uncertain numbers.",
-            "Writes one row per run to DIR/results.csv, the fraction of runs in each",
-            "fate with 95%% Wilson intervals to DIR/fractions.csv, and a picture for",
-            "one or two varied keys. A stopped sweep resumes: run the same command again.",
+            "--vary) and, with --samples, over random draws of its uncertain numbers:",
+            "draw s is the same at every grid point (paired draws), so differences",
+            "between grid points are not sampling noise. Writes one row per run to",
+            "DIR/results.csv (with the values drawn), the fraction of runs in each",
+            "outcome with 95%% Wilson intervals to DIR/fractions.csv (fates, together,",
+            "each --pair, the group's verdict), and pictures for one or two varied keys.",
+            "A stopped sweep resumes: run the same command again.",
             "",
             "Example:",
             "  holdfast sweep scenarios/observed-ossel-group.toml \\",
-            "      --vary cosmology.dark_energy.w0=-1.6:-1.0:13 \\",
-            "      --samples 50 --seed 7 --until 60 --out w-sweep"
+            "      --vary cosmology.dark_energy.w0=-1.6:-1.0:7 \\",
+            "      --samples 20 --seed 7 --pair Quillon,Carrowmere --out w-sweep"
         })
 public final class SweepCommand implements Callable<Integer> {
 
@@ -70,6 +73,20 @@ public final class SweepCommand implements Callable<Integer> {
 
     @Option(names = "--seed", paramLabel = "S", defaultValue = "1", description = "Master seed (default: ${DEFAULT-VALUE}).")
     long seed;
+
+    @Option(names = "--draws", paramLabel = "paired|independent", defaultValue = SweepPlan.PAIRED,
+            description = "paired: draw s of every uncertain number is the same at every grid point, as evolve "
+                    + "--seed S --sample s gives it; independent: fresh draws at every point (default: ${DEFAULT-VALUE}).")
+    String draws;
+
+    @Option(names = "--pair", paramLabel = "A,B",
+            description = "Count the runs in which members A and B end bound to each other or merged (repeatable).")
+    List<String> pairs = new ArrayList<>();
+
+    @Option(names = "--outcome", paramLabel = "WHAT",
+            description = "What the two-key map shows: group (the group stays bound; the default), a member's "
+                    + "name (it ends together with the group) or A+B (a --pair).")
+    String outcome;
 
     @Option(names = "--workers", paramLabel = "N", description = "Worker threads (default: all cores).")
     Integer workers;
@@ -118,7 +135,26 @@ public final class SweepCommand implements Callable<Integer> {
         RunSpec runSpec = new RunSpec(RunFunctions.current(), plan.sample(),
                 untilGyr == null ? Double.NaN : untilGyr, snapshots);
         SweepProgress progress = new SweepProgress(stdout, RunProgress.onTerminal(), progressEveryS);
-        Sweep.Summary s = Sweep.run(plan, scenario, dir, runSpec, eng, progress);
+        PrintWriter stderr = spec.commandLine().getErr();
+        // Ctrl+C or SIGTERM: stop saving, say what was kept; the JVM then exits 130 (143).
+        Thread onStop = new Thread(() -> {
+            if (!progress.complete()) {
+                stderr.println();
+                stderr.println(progress.stop());
+                stderr.flush();
+            }
+        }, "holdfast-sweep-stop");
+        Runtime.getRuntime().addShutdownHook(onStop);
+        Sweep.Summary s;
+        try {
+            s = Sweep.run(plan, scenario, dir, runSpec, eng, progress);
+        } finally {
+            try {
+                Runtime.getRuntime().removeShutdownHook(onStop);
+            } catch (IllegalStateException e) {
+                // already stopping: the hook says what was kept
+            }
+        }
         stdout.printf("sweep: %d runs in %s (%d made now, %d already done)%n", s.runsInShard(),
                 plan.shardCount() == 1 ? "all" : "shard " + plan.shardIndex() + "/" + plan.shardCount(), s.made(),
                 s.alreadyDone());
@@ -158,9 +194,15 @@ public final class SweepCommand implements Callable<Integer> {
         if (untilGyr != null && !Double.isFinite(untilGyr)) {
             throw new ScenarioException("--until", null, "must be a finite number of Gyr");
         }
+        if (!draws.equals(SweepPlan.PAIRED) && !draws.equals(SweepPlan.INDEPENDENT)) {
+            throw new ScenarioException("--draws", draws, "choose paired or independent");
+        }
+        List<List<String>> named = pairs(check, pairs);
+        String shown = outcomeShown(check, named, outcome);
         int[] sh = shard();
         SweepPlan plan = new SweepPlan(SweepPlan.FORMAT, scenario.toString(), sha256(scenario), fixed.asMap(), axes,
-                samples == null ? 1 : samples, samples != null, seed, untilGyr, keepSnapshots, sh[0], sh[1]);
+                samples == null ? 1 : samples, samples != null, seed, untilGyr, keepSnapshots, sh[0], sh[1], draws,
+                named, shown);
         long runs = plan.runs();
         if (runs > Integer.MAX_VALUE || runs < 0) {
             throw new ScenarioException("--vary", null, "the sweep would have " + runs + " runs, more than "
@@ -172,6 +214,47 @@ public final class SweepCommand implements Callable<Integer> {
         }
         ValueCheck.readAtEveryValue(scenario, fixed.asMap(), axes, untilGyr == null ? Double.NaN : untilGyr);
         return plan;
+    }
+
+    /** Parses and checks --pair A,B options: two different members of the scenario, each pair once. */
+    static List<List<String>> pairs(KeyCheck check, List<String> given) {
+        List<List<String>> out = new ArrayList<>();
+        Set<Set<String>> seen = new java.util.HashSet<>();
+        for (String g : given) {
+            String[] p = g.split(",", -1);
+            if (p.length != 2 || p[0].isBlank() || p[1].isBlank()) {
+                throw new ScenarioException("--pair", g, "expected two member names, A,B");
+            }
+            String a = p[0].trim();
+            String b = p[1].trim();
+            check.requireGalaxy("--pair", a);
+            check.requireGalaxy("--pair", b);
+            if (a.equals(b)) {
+                throw new ScenarioException("--pair", g, "names the same member twice");
+            }
+            if (!seen.add(Set.of(a, b))) {
+                throw new ScenarioException("--pair", g, "is given twice");
+            }
+            out.add(List.of(a, b));
+        }
+        return out;
+    }
+
+    /** Checks --outcome: group, a member's name, or A+B of a --pair; null for the default (group). */
+    static String outcomeShown(KeyCheck check, List<List<String>> pairs, String outcome) {
+        if (outcome == null || outcome.equals("group")) {
+            return null;
+        }
+        for (List<String> p : pairs) {
+            if (outcome.equals(p.get(0) + "+" + p.get(1)) || outcome.equals(p.get(1) + "+" + p.get(0))) {
+                return p.get(0) + "+" + p.get(1);
+            }
+        }
+        if (outcome.contains("+")) {
+            throw new ScenarioException("--outcome", outcome, "is not one of the --pair options given");
+        }
+        check.requireGalaxy("--outcome", outcome);
+        return outcome;
     }
 
     private int[] shard() {

@@ -25,7 +25,8 @@ import org.holdfast.sweep.RunOutcome;
 import org.holdfast.sweep.RunRecord;
 import org.holdfast.sweep.RunSpec;
 import org.holdfast.sweep.RunTask;
-import org.holdfast.sweep.SeedPlan;
+import org.holdfast.sweep.CriticalCurve;
+import org.holdfast.sweep.Outcomes;
 import org.holdfast.sweep.Threshold;
 import org.holdfast.sweep.ValueCheck;
 
@@ -42,14 +43,20 @@ import picocli.CommandLine.Model.CommandSpec;
         description = {
             "Finds the value of one key between LO and HI at which a stated outcome",
             "starts or stops: a member's fate (--member NAME --fate bound|merged|",
-            "escaped|ripped) or, without --member, the group's verdict (--fate bound|",
-            "partly-bound|dissolved), reached by --within-gyr. Bisects on the outcome;",
-            "with --samples N, on the fraction of N realisations (at one half).",
+            "escaped|ripped|unbound|together) or, without --member, the group's verdict",
+            "(--fate bound|partly-bound|dissolved|unbound), reached by --within-gyr.",
+            "Bisects on the outcome; with --samples N, on the fraction of N realisations",
+            "(at one half; draw s is the same at every value). With --along KEY2=A:B:N,",
+            "finds it at each of N values of a second key: a critical curve, written to",
+            "DIR/critical-curve.csv and drawn in DIR/critical-curve.png.",
             "",
             "Example:",
             "  holdfast threshold scenarios/tethered-pair.toml \\",
             "      --vary cosmology.dark_energy.w0=-2.0:-1.0 \\",
-            "      --member Wrenna --fate ripped --within-gyr 60 --tolerance 0.001"
+            "      --member Wrenna --fate ripped --within-gyr 60 --tolerance 0.001",
+            "  holdfast threshold scenarios/tethered-pair.toml \\",
+            "      --vary cosmology.dark_energy.w0=-2.0:-0.4 --along cosmology.dark_energy.wa=0:0.15:4 \\",
+            "      --member Wrenna --fate ripped --within-gyr 60 --tolerance 0.01 --out rip-curve"
         })
 public final class ThresholdCommand implements Callable<Integer> {
 
@@ -91,6 +98,14 @@ public final class ThresholdCommand implements Callable<Integer> {
     @Option(names = "--json", description = "Print one JSON object.")
     boolean json;
 
+    @Option(names = "--along", paramLabel = "KEY=START:STOP:COUNT|KEY=V1,V2,...",
+            description = "Find the threshold at each value of a second key: a critical curve (CSV and PNG in --out).")
+    String along;
+
+    @Option(names = "--out", paramLabel = "DIR",
+            description = "Folder for the critical curve with --along (default: threshold-SCENARIONAME).")
+    Path out;
+
     @Spec
     CommandSpec spec;
 
@@ -116,7 +131,10 @@ public final class ThresholdCommand implements Callable<Integer> {
         for (String k : Overrides.parse(set).asMap().keySet()) {
             check.requireKnown(Overrides.OPTION, k);
         }
-        List<String> allowed = member == null ? RunOutcome.VERDICTS : MemberFate.FATES;
+        List<String> allowed = new ArrayList<>(member == null ? RunOutcome.VERDICTS : MemberFate.FATES);
+        if (member != null) {
+            allowed.add(MemberFate.TOGETHER);
+        }
         if (!allowed.contains(fate)) {
             throw new ScenarioException("--fate", fate, "choose one of " + String.join(", ", allowed)
                     + (member == null ? " (a group verdict; add --member NAME for a member's fate)" : ""));
@@ -139,12 +157,14 @@ public final class ThresholdCommand implements Callable<Integer> {
                     "must be later than the runs' start (%.4g Gyr from today), since fates are decided forward"
                             + " in time (got %.4g)", start, withinGyr));
         }
-        List<String> names = atLow.group().galaxies().stream().map(g -> g.name()).toList();
-        if (member != null && !names.contains(member)) {
-            throw new ScenarioException("--member", member, "no such member; the scenario has " + String.join(", ", names));
+        if (member != null) {
+            check.requireGalaxy("--member", member);
         }
         int n = samples == null ? 1 : samples;
-        Evaluator eval = new Evaluator(key, n);
+        if (along != null) {
+            return curve(check, key, lo, hi, tol, n);
+        }
+        Evaluator eval = new Evaluator(key, n, Map.of());
         Threshold.Result r;
         try {
             r = Threshold.find(eval::fractionAt, lo, hi, tol, maxEvaluations);
@@ -162,28 +182,43 @@ public final class ThresholdCommand implements Callable<Integer> {
      */
     private final class Evaluator {
         private final String key;
-        private final long[] seeds;
+        private final int draws;
         private final Map<String, String> fixed;
         private final RunSpec runSpec;
         private final LocalEngine engine;
+        private final List<String> varied;
         private int runs;
 
-        Evaluator(String key, int n) {
+        Evaluator(String key, int n, Map<String, String> more) {
             this.key = key;
-            this.seeds = new SeedPlan(seed).forPoint(0, n);
-            this.fixed = Overrides.parse(set).asMap();
+            this.draws = n;
+            this.fixed = new LinkedHashMap<>(Overrides.parse(set).asMap());
+            this.fixed.putAll(more);
             this.runSpec = new RunSpec(RunFunctions.current(), samples != null,
                     withinGyr == null ? Double.NaN : withinGyr, null);
             int w = workers == null ? Runtime.getRuntime().availableProcessors() : Math.max(1, workers);
             this.engine = new LocalEngine(Math.min(w, n));
+            this.varied = new ArrayList<>(List.of(key));
+            this.varied.addAll(more.keySet());
         }
 
+        private final Map<Double, Double> known = new java.util.HashMap<>();
+
         double fractionAt(double x) {
+            Double f = known.get(x);
+            if (f == null) {
+                f = evaluate(x);
+                known.put(x, f);
+            }
+            return f;
+        }
+
+        private double evaluate(double x) {
             Map<String, String> o = new LinkedHashMap<>(fixed);
             o.put(key, Axis.format(x));
             List<RunTask> tasks = new ArrayList<>();
-            for (int s = 0; s < seeds.length; s++) {
-                tasks.add(new RunTask(s, 0, s, seeds[s], o, List.of(key)));
+            for (int s = 0; s < draws; s++) {
+                tasks.add(new RunTask(s, 0, s, seed, s, o, varied));
             }
             int[] hits = {0};
             try {
@@ -193,8 +228,8 @@ public final class ThresholdCommand implements Callable<Integer> {
             } catch (Exception e) {
                 throw new IllegalStateException(e);
             }
-            runs += seeds.length;
-            return (double) hits[0] / seeds.length;
+            runs += draws;
+            return (double) hits[0] / draws;
         }
     }
 
@@ -209,11 +244,82 @@ public final class ThresholdCommand implements Callable<Integer> {
             return fate.equals("bound") || o.boundUntilGyr() == null || o.boundUntilGyr() <= t;
         }
         MemberFate f = o.member(member);
+        if (f != null && fate.equals(MemberFate.TOGETHER)) {
+            return Outcomes.together(o, member);
+        }
         if (f == null) {
             List<String> names = o.members().stream().map(MemberFate::name).toList();
             throw new ScenarioException("--member", member, "no such member; the scenario has " + String.join(", ", names));
         }
         return f.fate().equals(fate) && (f.atGyr() == null || f.atGyr() <= t);
+    }
+
+    /** The critical curve: the threshold of {@code key} at every value of the --along key. */
+    private int curve(KeyCheck check, String key, double lo, double hi, double tol, int n) throws Exception {
+        Axis alongAxis = Axis.parse(along);
+        if (alongAxis.key().equals(key)) {
+            throw new ScenarioException("--along", along, "must name another key than --vary");
+        }
+        check.requireNumber("--along", alongAxis.key());
+        ValueCheck.readAtEveryValue(scenario, Overrides.parse(set).asMap(), List.of(alongAxis), Double.NaN);
+        Path dir = out != null ? out : Path.of("threshold-" + baseName(scenario));
+        org.holdfast.output.RunFolder.makeFolder(dir, "--out");
+        List<CriticalCurve.Point> points = new ArrayList<>();
+        PrintWriter o = spec.commandLine().getOut();
+        for (double a : alongAxis.values()) {
+            Evaluator eval = new Evaluator(key, n, Map.of(alongAxis.key(), Axis.format(a)));
+            CriticalCurve.Point p;
+            try {
+                Threshold.Result r = Threshold.find(eval::fractionAt, lo, hi, tol, maxEvaluations);
+                double[] ci = medianInterval(eval, lo, hi, tol, n);
+                p = new CriticalCurve.Point(a, true, r.value(), r.low(), r.high(), r.evaluations().get(r.low()),
+                        r.evaluations().get(r.high()), eval.runs, ci[0], ci[1]);
+            } catch (Threshold.NoChangeException e) {
+                p = new CriticalCurve.Point(a, false, Double.NaN, lo, hi, e.fractionAtLow(), e.fractionAtHigh(), eval.runs,
+                        Double.NaN, Double.NaN);
+            }
+            points.add(p);
+            o.printf(Locale.ROOT, "  %s = %-10s %s%n", alongAxis.key(), Axis.format(a), p.found()
+                    ? String.format(Locale.ROOT, "%s = %.6g  bracket [%.6g, %.6g]%s", key, p.value(), p.low(), p.high(),
+                            Double.isNaN(p.ciLow()) ? "" : String.format(Locale.ROOT, "  median 95%% [%.6g, %.6g]",
+                                    p.ciLow(), p.ciHigh()))
+                    : "no change between " + Axis.format(lo) + " and " + Axis.format(hi));
+            o.flush();
+        }
+        String what = (member == null ? "group verdict " : member + " ") + fate
+                + (withinGyr == null ? "" : " by " + withinGyr + " Gyr");
+        for (Path p : CriticalCurve.write(dir, key, alongAxis.key(), what, n, points)) {
+            o.println("  wrote " + p);
+        }
+        o.flush();
+        return 0;
+    }
+
+    /**
+     * A 95% interval for the median draw's critical value (6 paired draws or more): where f crosses
+     * the two levels of {@link Threshold#medianLevels95}; NaN ends otherwise, or where a level is
+     * not crossed inside the range.
+     */
+    private double[] medianInterval(Evaluator eval, double lo, double hi, double tol, int n) {
+        double[] levels = Threshold.medianLevels95(n);
+        if (levels == null) {
+            return new double[] {Double.NaN, Double.NaN};
+        }
+        double[] x = new double[2];
+        for (int i = 0; i < 2; i++) {
+            try {
+                x[i] = Threshold.find(eval::fractionAt, lo, hi, tol, maxEvaluations, levels[i]).value();
+            } catch (Threshold.NoChangeException e) {
+                return new double[] {Double.NaN, Double.NaN};
+            }
+        }
+        return new double[] {Math.min(x[0], x[1]), Math.max(x[0], x[1])};
+    }
+
+    private static String baseName(Path p) {
+        String name = p.getFileName().toString();
+        int dot = name.lastIndexOf('.');
+        return dot > 0 ? name.substring(0, dot) : name;
     }
 
     private void print(String key, Threshold.Result r, int runs, double tol) throws Exception {

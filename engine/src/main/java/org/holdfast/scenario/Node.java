@@ -102,6 +102,10 @@ public final class Node {
     private double readNumber(String key, boolean mustBePositive) {
         String o = overrides.take(keyPath(key));
         if (o != null) {
+            TomlTable given = overrides.inlineTable(keyPath(key), o);
+            if (given != null) {
+                return finite(key, mustBePositive ? numbers.readPositive(this, key, given) : numbers.read(this, key, given));
+            }
             return parseOverrideNumber(key, o);
         }
         Object raw = table.get(List.of(key));
@@ -245,7 +249,9 @@ public final class Node {
         for (int i = 0; i < length; i++) {
             String ck = key + "." + i;
             String o = overrides.take(keyPath(ck));
-            out[i] = o != null ? parseOverrideNumber(ck, o) : finite(key, numbers.readComponent(this, key, i, arr.get(i)));
+            TomlTable given = o == null ? null : overrides.inlineTable(keyPath(ck), o);
+            out[i] = given != null ? finite(key, numbers.readComponent(this, key, i, given))
+                    : o != null ? parseOverrideNumber(ck, o) : finite(key, numbers.readComponent(this, key, i, arr.get(i)));
         }
         return out;
     }

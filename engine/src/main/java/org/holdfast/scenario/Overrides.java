@@ -5,6 +5,10 @@ import java.util.LinkedHashSet;
 import java.util.Map;
 import java.util.Set;
 
+import org.tomlj.Toml;
+import org.tomlj.TomlParseResult;
+import org.tomlj.TomlTable;
+
 /**
  * Values given on the command line ({@code --set KEY=VALUE}, or a sweep's {@code --vary}) that
  * replace scenario values. Keys are dotted paths as {@link Node#path()} spells them; galaxies
@@ -12,6 +16,10 @@ import java.util.Set;
  * reader, otherwise it names a key that does not exist and {@link #checkAllUsed()} reports it.
  * Each override remembers the option it came from, so that a problem with a value the reader
  * took from it is blamed on that option rather than on the file's line it replaced.
+ *
+ * <p>A value may be an inline TOML table where the scenario takes a number, to make it
+ * uncertain from the command line: {@code --set 'galaxy.Harl.mass_msun={ median = 1.2e12,
+ * sigma_dex = 0.2 }'} reads exactly as the same table written in the file would.
  */
 public final class Overrides {
 
@@ -21,6 +29,7 @@ public final class Overrides {
     private final Map<String, String> values = new LinkedHashMap<>();
     private final Map<String, String> options = new LinkedHashMap<>();
     private final Set<String> used = new LinkedHashSet<>();
+    private final Set<String> asked = new LinkedHashSet<>();
 
     /** No overrides. */
     public static Overrides none() {
@@ -98,6 +107,7 @@ public final class Overrides {
 
     /** The override for a key, marking it used; null if none. */
     String take(String dottedKey) {
+        asked.add(dottedKey);
         String v = values.get(dottedKey);
         if (v != null) {
             used.add(dottedKey);
@@ -110,12 +120,72 @@ public final class Overrides {
         return java.util.Collections.unmodifiableMap(values);
     }
 
-    /** @throws ScenarioException naming the first override that matched no key */
+    /**
+     * @throws ScenarioException naming the first override that matched no key, with the nearest
+     *     key the reader looked for ("did you mean 'galaxy.Harl.mass_msun'?")
+     */
     public void checkAllUsed() {
         for (String k : values.keySet()) {
             if (!used.contains(k)) {
-                throw new ScenarioException(optionOf(k), k, "no such key in this scenario");
+                String hint = closestKey(k, asked);
+                throw new ScenarioException(optionOf(k), k, "no such key in this scenario"
+                        + (hint == null ? "" : " (did you mean '" + hint + "'?)"));
             }
         }
+    }
+
+    /**
+     * The key nearest a mistyped dotted key: first the part that differs (a galaxy's name, a
+     * table's or a key's), then the whole; null when nothing is near.
+     */
+    public static String closestKey(String key, java.util.Collection<String> known) {
+        String best = Node.closest(key, known);
+        if (best != null) {
+            return best;
+        }
+        // A long key with a short wrong part (a misspelt galaxy name) is far from everything as a
+        // whole: compare the keys of the same shape part by part, and accept one wrong part.
+        String[] parts = key.split("\\.", -1);
+        String found = null;
+        for (String k : known) {
+            String[] o = k.split("\\.", -1);
+            if (o.length != parts.length) {
+                continue;
+            }
+            int wrong = -1;
+            int differ = 0;
+            for (int i = 0; i < o.length; i++) {
+                if (!o[i].equals(parts[i])) {
+                    wrong = i;
+                    differ++;
+                }
+            }
+            if (differ == 1 && Node.closest(parts[wrong], java.util.List.of(o[wrong])) != null) {
+                if (found != null && !found.equals(k)) {
+                    return null;
+                }
+                found = k;
+            }
+        }
+        return found;
+    }
+
+    /**
+     * An override's value as an inline table ("{ median = 1.2e12, sigma_dex = 0.2 }"), or null
+     * when it is not written as one.
+     *
+     * @throws ScenarioException naming the option and the key when the table does not parse
+     */
+    public TomlTable inlineTable(String dottedKey, String value) {
+        String t = value.trim();
+        if (!t.startsWith("{")) {
+            return null;
+        }
+        TomlParseResult r = Toml.parse("value = " + t);
+        if (r.hasErrors() || !(r.get("value") instanceof TomlTable table)) {
+            throw new ScenarioException(optionOf(dottedKey), dottedKey, "expected a number or an inline table such as"
+                    + " { median = 1.2e12, sigma_dex = 0.2 }, got '" + t + "'");
+        }
+        return table;
     }
 }

@@ -5,20 +5,26 @@ import java.io.StringWriter;
 import java.util.ArrayList;
 import java.util.LinkedHashSet;
 import java.util.List;
-import java.util.Locale;
 import java.util.Set;
+import java.util.function.Predicate;
 
 import org.apache.commons.csv.CSVPrinter;
 
 /**
  * {@code fractions.csv}: at each grid point, the fraction of its runs that ended in each
- * member fate and in each group verdict, with a 95% Wilson score interval ({@link Wilson}).
+ * outcome, with a 95% Wilson score interval ({@link Wilson}).
  *
  * <p>Long format, one row per (point, subject, outcome): {@code point}, each varied key,
- * {@code level} ({@code member} or {@code group}), {@code name} (the member; the group's
- * rows carry an empty name), {@code outcome} (a fate or a verdict), {@code count},
- * {@code runs}, {@code fraction}, {@code wilson95_low}, {@code wilson95_high}. Every known
- * fate and verdict is listed, with count 0 where none occurred, so a filter never misses a row.
+ * {@code level}, {@code name}, {@code outcome}, {@code count}, {@code runs}, {@code fraction},
+ * {@code wilson95_low}, {@code wilson95_high}. The levels:
+ * <ul>
+ * <li>{@code member}: each fate (bound, merged, escaped, ripped, unbound) and {@code together}
+ * (bound, or merged into a galaxy that stays bound: {@link Outcomes#together});</li>
+ * <li>{@code pair} (name {@code A+B}, from {@code --pair A,B}): {@code together}, the two end
+ * bound to each other or merged ({@link Outcomes#pairTogether}, symmetric in A and B);</li>
+ * <li>{@code group} (empty name): each verdict over the members bound at the start.</li>
+ * </ul>
+ * Every known outcome is listed, with count 0 where none occurred, so a filter never misses a row.
  */
 public final class Fractions {
 
@@ -50,24 +56,38 @@ public final class Fractions {
             while (j < records.size() && records.get(j).point() == point) {
                 j++;
             }
-            List<RunRecord> at = records.subList(i, j);
+            List<RunOutcome> at = records.subList(i, j).stream().map(RunRecord::outcome).toList();
             double[] values = plan.valuesAt(point);
             for (String m : members) {
                 for (String fate : fates) {
-                    long k = at.stream().filter(r -> {
-                        MemberFate f = r.outcome().member(m);
+                    rows.add(row(point, values, "member", m, fate, count(at, o -> {
+                        MemberFate f = o.member(m);
                         return f != null && f.fate().equals(fate);
-                    }).count();
-                    rows.add(row(point, values, "member", m, fate, k, at.size()));
+                    }), at.size()));
                 }
+                rows.add(row(point, values, "member", m, MemberFate.TOGETHER,
+                        count(at, o -> Outcomes.together(o, m)), at.size()));
+            }
+            for (List<String> p : plan.pairs()) {
+                rows.add(row(point, values, "pair", Outcomes.pairName(p), MemberFate.TOGETHER,
+                        count(at, o -> Outcomes.pairTogether(o, p.get(0), p.get(1))), at.size()));
             }
             for (String v : verdicts) {
-                long k = at.stream().filter(r -> r.outcome().verdict().equals(v)).count();
-                rows.add(row(point, values, "group", "", v, k, at.size()));
+                rows.add(row(point, values, "group", "", v, count(at, o -> o.verdict().equals(v)), at.size()));
             }
             i = j;
         }
         return rows;
+    }
+
+    private static long count(List<RunOutcome> at, Predicate<RunOutcome> p) {
+        long k = 0;
+        for (RunOutcome o : at) {
+            if (p.test(o)) {
+                k++;
+            }
+        }
+        return k;
     }
 
     private static Row row(int point, double[] values, String level, String name, String outcome, long k, long n) {
@@ -98,7 +118,8 @@ public final class Fractions {
         return w.toString();
     }
 
-    private static String fmt(double v) {
-        return String.format(Locale.ROOT, "%.6f", v);
+    /** Six decimals, as {@code String.format("%.6f")} writes them (half up on the shortest decimal form), faster. */
+    static String fmt(double v) {
+        return java.math.BigDecimal.valueOf(v).setScale(6, java.math.RoundingMode.HALF_UP).toPlainString();
     }
 }

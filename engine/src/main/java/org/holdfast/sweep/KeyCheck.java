@@ -33,6 +33,7 @@ public final class KeyCheck {
     private final Set<String> numbers = new HashSet<>();
     private final Map<String, String> others = new HashMap<>();
     private final Set<String> tables = new HashSet<>();
+    private final List<String> galaxies = new java.util.ArrayList<>();
 
     private KeyCheck(Node root) {
         tables.add("");
@@ -63,8 +64,41 @@ public final class KeyCheck {
         boolean velocity = parent.endsWith(".velocity_kms") && leaf.matches("[012]")
                 && tables.contains(parent.substring(0, parent.length() - ".velocity_kms".length()));
         if (!optional && !velocity) {
-            throw new ScenarioException(option, key, "no such key in this scenario");
+            String hint = Overrides.closestKey(key, knownKeys());
+            throw new ScenarioException(option, key, "no such key in this scenario"
+                    + (hint == null ? "" : " (did you mean '" + hint + "'?)"));
         }
+    }
+
+    /** Every key this scenario has or may have: for "did you mean". */
+    private Set<String> knownKeys() {
+        Set<String> all = new java.util.TreeSet<>(numbers);
+        all.addAll(others.keySet());
+        for (String t : tables) {
+            for (String leaf : OPTIONAL_NUMBERS) {
+                all.add(t.isEmpty() ? leaf : t + "." + leaf);
+            }
+        }
+        return all;
+    }
+
+    /** The names of the scenario's galaxies, in file order. */
+    public List<String> galaxyNames() {
+        return List.copyOf(galaxies);
+    }
+
+    /**
+     * @param option the option that names the member ("--pair", "--member")
+     * @throws ScenarioException if the scenario has no galaxy of that name, with the nearest name
+     */
+    public void requireGalaxy(String option, String name) {
+        if (galaxies.contains(name)) {
+            return;
+        }
+        String hint = Overrides.closestKey(name, galaxies);
+        throw new ScenarioException(option, name, "no such member"
+                + (hint == null ? "" : " (did you mean '" + hint + "'?)") + "; the scenario has "
+                + String.join(", ", galaxies));
     }
 
     /**
@@ -90,6 +124,11 @@ public final class KeyCheck {
                 walk(node.table(k));
             } else if (raw instanceof TomlArray arr && !arr.isEmpty() && arr.get(0) instanceof TomlTable) {
                 List<Node> elements = node.tables(k, "name");
+                if (node.path().isEmpty() && k.equals("galaxy")) {
+                    for (Node e : elements) {
+                        galaxies.add(e.path().substring("galaxy.".length()));
+                    }
+                }
                 for (Node e : elements) {
                     tables.add(e.path());
                     walk(e);

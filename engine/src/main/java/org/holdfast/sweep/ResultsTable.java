@@ -14,9 +14,13 @@ import org.apache.commons.csv.CSVPrinter;
 
 /**
  * {@code results.csv}: one row per run, sorted by run index. Columns: {@code point},
- * {@code sample}, {@code seed}, each varied key, each sampled key (sorted), {@code verdict},
+ * {@code sample}, {@code seed}, each varied key, each sampled key (sorted: the values drawn, so
+ * that paired draws show as equal values in the rows of one sample), {@code verdict},
  * {@code bound_until_gyr}, then per member {@code NAME.fate}, {@code NAME.at_gyr},
- * {@code NAME.with}, then {@code energy_budget_error} and last {@code wall_s}.
+ * {@code NAME.left_gyr} (a ripped member: when it actually left), {@code NAME.with},
+ * {@code NAME.together}, {@code NAME.group} (the final bound subgroup, numbered from 1; equal
+ * numbers stay bound to each other or merged), {@code NAME.bound_at_start}, then
+ * {@code energy_budget_error} and last {@code wall_s}.
  *
  * <p>Everything but the last column depends only on the sweep, so two sweeps made with any
  * number of workers or shards give files equal byte for byte once {@code wall_s} is set
@@ -74,7 +78,11 @@ public final class ResultsTable {
         for (String m : members) {
             header.add(m + ".fate");
             header.add(m + ".at_gyr");
+            header.add(m + ".left_gyr");
             header.add(m + ".with");
+            header.add(m + ".together");
+            header.add(m + ".group");
+            header.add(m + ".bound_at_start");
         }
         header.add("energy_budget_error");
         header.add(WALL_COLUMN);
@@ -100,7 +108,11 @@ public final class ResultsTable {
                     MemberFate f = o.member(m);
                     row.add(f == null ? "" : f.fate());
                     row.add(f == null ? "" : num(f.atGyr()));
+                    row.add(f == null ? "" : num(f.leftGyr()));
                     row.add(f == null || f.with() == null ? "" : f.with());
+                    row.add(f == null ? "" : Boolean.toString(Outcomes.together(o, m)));
+                    row.add(f == null || f.group() == null ? "" : f.group().toString());
+                    row.add(f == null || f.boundAtStart() == null ? "" : f.boundAtStart().toString());
                 }
                 row.add(num(o.energyBudgetError()));
                 row.add(num(o.wallS()));

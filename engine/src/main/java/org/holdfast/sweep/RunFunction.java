@@ -17,7 +17,9 @@ public interface RunFunction extends Serializable {
     /**
      * @param scenario the scenario file
      * @param overrides dotted-key values that replace scenario values, as {@code evolve --set}
-     * @param seed this run's own seed
+     * @param seed the seed of the draws
+     * @param draw the draw index: uncertain numbers take draw {@code draw} of {@code seed}, as
+     *     {@code evolve --seed SEED --sample DRAW} does
      * @param sample whether to draw every uncertain number from its distribution with the seed
      *     (otherwise uncertain numbers take their central values)
      * @param untilGyr end of the run; NaN for the scenario's own until_gyr
@@ -25,6 +27,6 @@ public interface RunFunction extends Serializable {
      * @return the fates
      * @throws org.holdfast.scenario.ScenarioException for bad input (an unknown override key)
      */
-    RunOutcome run(Path scenario, Overrides overrides, long seed, boolean sample, double untilGyr,
+    RunOutcome run(Path scenario, Overrides overrides, long seed, long draw, boolean sample, double untilGyr,
             Path snapshotDir);
 }

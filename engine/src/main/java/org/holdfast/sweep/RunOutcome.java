@@ -8,7 +8,9 @@ import java.util.TreeMap;
 /**
  * What one run found.
  *
- * @param verdict the group's verdict: bound, partly-bound or dissolved
+ * @param verdict the group's verdict over the members bound at the start: bound (all of them
+ *     end together), partly-bound (two or more of them do), dissolved (none stay together), or
+ *     unbound (no two members were bound at the start)
  * @param boundUntilGyr when the group stopped being bound; null if it stayed bound
  * @param members each member's fate, in scenario order
  * @param energyBudgetError relative error of the run's energy budget
@@ -22,7 +24,7 @@ public record RunOutcome(String verdict, Double boundUntilGyr, List<MemberFate> 
     private static final long serialVersionUID = 1L;
 
     /** The group verdicts a run may give. */
-    public static final List<String> VERDICTS = List.of("bound", "partly-bound", "dissolved");
+    public static final List<String> VERDICTS = List.of("bound", "partly-bound", "dissolved", "unbound");
 
     public RunOutcome {
         members = List.copyOf(members);

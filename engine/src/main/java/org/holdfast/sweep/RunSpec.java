@@ -32,7 +32,7 @@ public record RunSpec(RunFunction function, boolean sample, double untilGyr, Str
         Path snaps = snapshotRoot == null ? null
                 : Path.of(snapshotRoot).resolve(String.format("run-%08d", task.run()));
         long t0 = System.nanoTime();
-        RunOutcome out = function.run(scenario, o, task.seed(), sample, untilGyr, snaps);
+        RunOutcome out = function.run(scenario, o, task.seed(), task.draw(), sample, untilGyr, snaps);
         double wall = (System.nanoTime() - t0) * 1e-9;
         if (out == null) {
             throw new IllegalStateException("the physics returned no outcome for run " + task.run());

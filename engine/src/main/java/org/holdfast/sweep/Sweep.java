@@ -46,6 +46,15 @@ public final class Sweep {
         /** After the last run, before the tables are written. */
         default void finish() {
         }
+
+        /**
+         * Whether runs that finish from now on are still saved; false once the sweep is being
+         * stopped, so that a count of saved runs given then stays true. Asked, and the run
+         * saved, while holding this listener's lock.
+         */
+        default boolean saving() {
+            return true;
+        }
     }
 
     private Sweep() {
@@ -85,9 +94,14 @@ public final class Sweep {
             listener.start(shardTasks.size(), already);
             try {
                 engine.run(scenario, spec, pending, r -> {
-                    journal.append(r);
-                    all.add(r);
-                    listener.runDone(r);
+                    synchronized (listener) {
+                        if (!listener.saving()) {
+                            return;
+                        }
+                        journal.append(r);
+                        all.add(r);
+                        listener.runDone(r);
+                    }
                 });
             } catch (ScenarioException e) {
                 if (fresh) {
@@ -135,10 +149,7 @@ public final class Sweep {
             Path fractions = dir.resolve(Fractions.FILE);
             Outputs.writeAtomically(fractions, Fractions.csv(plan, rows).getBytes(StandardCharsets.UTF_8));
             written.add(fractions);
-            Path picture = SweepPlots.draw(plan, rows, dir);
-            if (picture != null) {
-                written.add(picture);
-            }
+            written.addAll(SweepPlots.draw(plan, rows, sorted, dir));
         }
         return written;
     }
@@ -156,6 +167,10 @@ public final class Sweep {
                 throw new ScenarioException("--out", dir.toString(), "holds a different sweep: the folder was made with "
                         + diff.other() + ", this command asks for " + diff.mine() + "; choose another folder");
             }
+            if (!there.pairs().equals(plan.pairs()) || !java.util.Objects.equals(there.outcome(), plan.outcome())) {
+                // the same runs, other tables: remember what this command asked to be shown
+                writePlan(file, plan);
+            }
             return;
         }
         try (var entries = Files.list(dir)) {
@@ -164,6 +179,10 @@ public final class Sweep {
                 throw new ScenarioException("--out", dir.toString(), "is not empty and holds no sweep; choose another folder");
             }
         }
+        writePlan(file, plan);
+    }
+
+    static void writePlan(Path file, SweepPlan plan) throws IOException {
         byte[] json = Journal.JSON.copy().enable(SerializationFeature.INDENT_OUTPUT).writeValueAsBytes(plan);
         Outputs.writeAtomically(file, json);
     }

@@ -16,8 +16,9 @@ import org.holdfast.scenario.ScenarioException;
 /**
  * Combines the folders of the shards of one sweep into one folder that looks as if the sweep
  * had been made unsharded: the same {@code sweep.json} (as shard 1/1), journal, results,
- * fractions and picture. Refuses shards of different sweeps, a missing or repeated shard, and a
- * shard that has not finished.
+ * fractions and pictures. Refuses shards of different sweeps, a missing or repeated shard, and a
+ * shard that has not finished. A merge stopped part-way (kill -9 included) is finished by the
+ * same command: the output folder then names this merge, and everything is written again.
  */
 public final class SweepMerge {
 
@@ -75,16 +76,48 @@ public final class SweepMerge {
             throw new ScenarioException("sweep-merge", null, "missing shard(s) " + missing + " of " + first.shardCount());
         }
         SweepPlan whole = first.withShard(1, 1);
-        if (Files.exists(out.resolve(Sweep.PLAN_FILE)) || Files.exists(out.resolve(Journal.FILE))) {
-            throw new ScenarioException("--out", out.toString(), "already holds a sweep; choose an empty folder");
-        }
+        checkOut(out, whole);
         RunFolder.makeFolder(out, "--out");
         ResultsTable.sorted(all);
-        Journal.writeAll(out, all);
+        // The plan first: a merge killed at any later moment leaves a folder that names this
+        // sweep, which the same command then accepts and writes again from the start (every
+        // file is written whole, to a temporary name and renamed).
         Outputs.writeAtomically(out.resolve(Sweep.PLAN_FILE),
                 Journal.JSON.copy().enable(SerializationFeature.INDENT_OUTPUT).writeValueAsBytes(whole));
+        Journal.writeAll(out, all);
         List<Path> written = new ArrayList<>(List.of(out.resolve(Sweep.PLAN_FILE), out.resolve(Journal.FILE)));
         written.addAll(Sweep.writeTables(out, whole, all));
         return written;
+    }
+
+    /**
+     * The output folder must be new, empty (but for temporary files a killed merge leaves), or
+     * hold this very merge (a merge stopped part-way, or done already: it is written again).
+     */
+    private static void checkOut(Path out, SweepPlan whole) throws IOException {
+        if (!Files.isDirectory(out)) {
+            return;
+        }
+        if (Files.exists(out.resolve(Sweep.PLAN_FILE))) {
+            SweepPlan there;
+            try {
+                there = Sweep.readPlan(out);
+            } catch (ScenarioException e) {
+                throw new ScenarioException("--out", out.toString(), "holds a damaged sweep plan; choose an empty folder");
+            }
+            SweepPlan.Difference diff = whole.differenceFrom(there);
+            if (diff != null || there.shardCount() != 1) {
+                throw new ScenarioException("--out", out.toString(), "already holds a different sweep ("
+                        + (diff != null ? "made with " + diff.other() : "shard " + there.shardIndex() + "/"
+                                + there.shardCount()) + "); choose an empty folder");
+            }
+            return;
+        }
+        try (var entries = Files.list(out)) {
+            if (entries.map(p -> p.getFileName().toString())
+                    .anyMatch(n -> !n.startsWith(".") && !n.endsWith(".tmp") && !n.endsWith(".part"))) {
+                throw new ScenarioException("--out", out.toString(), "is not empty and holds no sweep; choose an empty folder");
+            }
+        }
     }
 }

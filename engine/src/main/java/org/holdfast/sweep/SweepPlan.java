@@ -29,17 +29,39 @@ import java.util.Objects;
  * @param keepSnapshots whether runs write snapshots
  * @param shardIndex this shard, from 1
  * @param shardCount number of shards
+ * @param draws {@link #PAIRED} (draw s of the uncertain numbers is the same at every grid
+ *     point: common random numbers) or {@link #INDEPENDENT} (fresh draws at every point)
+ * @param pairs named pairs of members whose staying together is counted ({@code --pair A,B});
+ *     they change the tables, not the runs, so two plans that differ only here are the same sweep
+ * @param outcome what the two-key map shows: null for the group staying bound, a member's name
+ *     (it ends together), or {@code A+B} (a named pair); like the pairs, pictures only
  */
 public record SweepPlan(int format, String scenario, String scenarioSha256, Map<String, String> set,
         List<Axis> axes, int samples, boolean sample, long seed, Double untilGyr, boolean keepSnapshots,
-        int shardIndex, int shardCount) {
+        int shardIndex, int shardCount, String draws, List<List<String>> pairs, String outcome) {
 
     /** The current layout version. */
-    public static final int FORMAT = 1;
+    public static final int FORMAT = 2;
+
+    /** Draw s is the same at every grid point (the default). */
+    public static final String PAIRED = "paired";
+
+    /** Every run draws afresh. */
+    public static final String INDEPENDENT = "independent";
 
     public SweepPlan {
         set = new LinkedHashMap<>(set);
         axes = List.copyOf(axes);
+        draws = draws == null ? INDEPENDENT : draws;
+        pairs = pairs == null ? List.of() : pairs.stream().map(List::copyOf).toList();
+    }
+
+    /** A plan with paired draws and no named pairs. */
+    public SweepPlan(int format, String scenario, String scenarioSha256, Map<String, String> set, List<Axis> axes,
+            int samples, boolean sample, long seed, Double untilGyr, boolean keepSnapshots, int shardIndex,
+            int shardCount) {
+        this(format, scenario, scenarioSha256, set, axes, samples, sample, seed, untilGyr, keepSnapshots, shardIndex,
+                shardCount, PAIRED, List.of(), null);
     }
 
     /** The number of grid points (1 when nothing is varied). */
@@ -110,17 +132,25 @@ public record SweepPlan(int format, String scenario, String scenarioSha256, Map<
         return keys;
     }
 
-    /** The runs of this shard that are not yet done, with their seeds, in run order. */
+    /**
+     * The runs of this shard that are not yet done, with their seeds, in run order. With paired
+     * draws, sample s of every grid point is draw s of the master seed, so that every uncertain
+     * number, drawn from (seed, draw, key path), is the same across the grid (and the same as
+     * {@code evolve --seed SEED --sample s} gives); otherwise each run has its own seed from
+     * {@link SeedPlan} and draw 0.
+     */
     public List<RunTask> pendingTasks(BitSet done) {
         List<RunTask> tasks = new ArrayList<>();
         SeedPlan seeds = new SeedPlan(seed);
         List<String> varied = variedKeys();
+        boolean paired = PAIRED.equals(draws);
         for (int p = 0; p < points(); p++) {
-            long[] s = seeds.forPoint(p, samples);
+            long[] s = paired ? null : seeds.forPoint(p, samples);
             for (int k = 0; k < samples; k++) {
                 long run = (long) p * samples + k;
                 if (inShard(run) && !done.get((int) run)) {
-                    tasks.add(new RunTask(run, p, k, s[k], overridesAt(p), varied));
+                    tasks.add(paired ? new RunTask(run, p, k, seed, k, overridesAt(p), varied)
+                            : new RunTask(run, p, k, s[k], 0, overridesAt(p), varied));
                 }
             }
         }
@@ -130,7 +160,13 @@ public record SweepPlan(int format, String scenario, String scenarioSha256, Map<
     /** This plan as shard {@code index} of {@code count}. */
     public SweepPlan withShard(int index, int count) {
         return new SweepPlan(format, scenario, scenarioSha256, set, axes, samples, sample, seed, untilGyr,
-                keepSnapshots, index, count);
+                keepSnapshots, index, count, draws, pairs, outcome);
+    }
+
+    /** This plan with other named pairs and map outcome (what the tables and pictures show). */
+    public SweepPlan withShown(List<List<String>> newPairs, String newOutcome) {
+        return new SweepPlan(format, scenario, scenarioSha256, set, axes, samples, sample, seed, untilGyr,
+                keepSnapshots, shardIndex, shardCount, draws, newPairs, newOutcome);
     }
 
     /**
@@ -163,6 +199,9 @@ public record SweepPlan(int format, String scenario, String scenarioSha256, Map<
         }
         if (samples != o.samples || sample != o.sample) {
             return new Difference(o.describeSamples(), describeSamples());
+        }
+        if (!draws.equals(o.draws)) {
+            return new Difference("--draws " + o.draws, "--draws " + draws);
         }
         if (seed != o.seed) {
             return new Difference("--seed " + o.seed, "--seed " + seed);

@@ -2,150 +2,232 @@ package org.holdfast.sweep;
 
 import java.awt.BasicStroke;
 import java.awt.Color;
-import java.awt.Font;
-import java.io.ByteArrayOutputStream;
 import java.io.IOException;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
-import java.util.Locale;
 import java.util.Map;
 
-import org.knowm.xchart.BitmapEncoder;
-import org.knowm.xchart.HeatMapChart;
-import org.knowm.xchart.HeatMapChartBuilder;
+import org.holdfast.output.Charts;
+import org.holdfast.output.Palette;
 import org.knowm.xchart.XYChart;
-import org.knowm.xchart.XYChartBuilder;
 import org.knowm.xchart.XYSeries;
 import org.knowm.xchart.style.markers.SeriesMarkers;
 
 /**
- * The sweep's pictures, PNG, drawn headless: with one varied key, the fraction of runs in which
- * each member (and the whole group) stays bound against that key ({@code bound-fraction.png});
- * with two, a map of the fraction of runs whose group verdict is "bound" over both keys
- * ({@code bound-map.png}). With more keys there is no picture (slice {@code fractions.csv}).
+ * The sweep's pictures, PNG, drawn headless from {@code fractions.csv}'s rows and the runs.
+ *
+ * <p>With one varied key: {@code fractions.png}, the fraction of runs in which each member
+ * ends together with the group, each named pair stays together, and the group stays bound,
+ * every point with its 95% Wilson interval as a bar (curves shifted a little sideways so that
+ * coinciding ones stay visible; the group's drawn last, dark and thick, above the members'); and {@code fate-times.png}, a strip plot of the time of every member's fate
+ * (at_gyr) at each grid point, one colour per fate. With two: {@code map.png}
+ * ({@link MapPlot}), the chosen outcome's fraction over both keys with its 50% contour. With
+ * more keys there is no picture (slice {@code fractions.csv}).
  */
 public final class SweepPlots {
 
-    /** The one-key picture's file name. */
-    public static final String LINE_FILE = "bound-fraction.png";
+    /** The one-key fractions picture. */
+    public static final String LINE_FILE = "fractions.png";
 
-    /** The two-key picture's file name. */
-    public static final String MAP_FILE = "bound-map.png";
+    /** The one-key fate-times picture. */
+    public static final String TIMES_FILE = "fate-times.png";
 
-    /** Line colours: a dark slate for the group, then members in a muted, distinct order. */
-    private static final Color[] PALETTE = {
-        new Color(0x26, 0x32, 0x38), new Color(0xC0, 0x5A, 0x1F), new Color(0x2E, 0x7D, 0x6B),
-        new Color(0x6A, 0x4C, 0x93), new Color(0xB8, 0x8B, 0x1A), new Color(0x3B, 0x6E, 0xA8),
-        new Color(0x9E, 0x3D, 0x5C), new Color(0x5F, 0x7F, 0x2A)
-    };
+    /** The two-key map. */
+    public static final String MAP_FILE = "map.png";
 
-    /** The map's colour ramp, "never bound" to "always bound": ember to teal, light enough for dark numbers. */
-    private static final Color[] RAMP = {
-        new Color(0xC2, 0x5B, 0x3A), new Color(0xE3, 0xA0, 0x5C), new Color(0xF4, 0xEC, 0xD8),
-        new Color(0x86, 0xC2, 0xB6), new Color(0x4A, 0x96, 0x92)
-    };
+    /** The group's colour: the ink of the text, so that it stands apart from every member. */
+    static final Color GROUP = Palette.INK;
 
-    private static final Font TITLE = new Font(Font.SANS_SERIF, Font.BOLD, 18);
-    private static final Font LABEL = new Font(Font.SANS_SERIF, Font.PLAIN, 15);
+    /** Fate colours in the strip plot (not member colours: there, colour is the fate). */
+    private static final Map<String, Color> FATE_COLOURS = Map.of(
+            "merged", new Color(0x2F7FB8), "escaped", new Color(0xC7821A), "ripped", new Color(0xC9473B),
+            "unbound", new Color(0x6B675E));
 
     private SweepPlots() {
     }
 
     /**
-     * Draws the picture that fits the number of varied keys into {@code dir}.
+     * Draws the pictures that fit the number of varied keys into {@code dir}.
      *
-     * @return the file written, or null when there is none for this grid
+     * @param records the runs, sorted by run index
+     * @return the files written (none for three keys or more)
      */
-    public static Path draw(SweepPlan plan, List<Fractions.Row> rows, Path dir) throws IOException {
+    public static List<Path> draw(SweepPlan plan, List<Fractions.Row> rows, List<RunRecord> records, Path dir)
+            throws IOException {
+        List<Path> out = new ArrayList<>();
         if (plan.axes().size() == 1) {
             Path f = dir.resolve(LINE_FILE);
-            save(lineChart(plan, rows), f);
-            return f;
-        }
-        if (plan.axes().size() == 2) {
+            Charts.savePng(f, lineChart(plan, rows));
+            out.add(f);
+            Path t = dir.resolve(TIMES_FILE);
+            Charts.savePng(t, timesChart(plan, records));
+            out.add(t);
+        } else if (plan.axes().size() == 2) {
             Path f = dir.resolve(MAP_FILE);
-            save(mapChart(plan, rows), f);
-            return f;
+            MapPlot.save(plan, rows, f);
+            out.add(f);
         }
-        return null;
+        return out;
+    }
+
+    /** One curve of the fractions picture: a name and, per grid value, fraction and band. */
+    record Curve(String name, double[] y, double[] low, double[] high) {
+        Curve(String name, int n) {
+            this(name, new double[n], new double[n], new double[n]);
+        }
+    }
+
+    /** The curves of the fractions picture: members (together), pairs, then the group (bound). */
+    static List<Curve> curves(SweepPlan plan, List<Fractions.Row> rows) {
+        int n = plan.axes().get(0).size();
+        Map<String, Curve> byName = new LinkedHashMap<>();
+        Curve group = new Curve("group stays bound (members bound at the start)", n);
+        for (Fractions.Row r : rows) {
+            Curve c = null;
+            if (r.level().equals("member") && r.outcome().equals(MemberFate.TOGETHER)) {
+                c = byName.computeIfAbsent(r.name() + " together", k -> new Curve(k, n));
+            } else if (r.level().equals("pair")) {
+                c = byName.computeIfAbsent(r.name().replace("+", " & ") + " together", k -> new Curve(k, n));
+            } else if (r.level().equals("group") && r.outcome().equals("bound")) {
+                c = group;
+            }
+            if (c != null) {
+                int i = plan.indicesAt(r.point())[0];
+                c.y()[i] = r.fraction();
+                c.low()[i] = r.low();
+                c.high()[i] = r.high();
+            }
+        }
+        List<Curve> all = new ArrayList<>(byName.values());
+        all.add(group);
+        return all;
     }
 
     static XYChart lineChart(SweepPlan plan, List<Fractions.Row> rows) {
         Axis axis = plan.axes().get(0);
-        XYChart chart = new XYChartBuilder().width(900).height(600)
-                .title("Fraction of runs that stay bound")
-                .xAxisTitle(label(axis.key())).yAxisTitle("fraction of runs bound").build();
-        style(chart);
-        Map<String, double[]> series = new LinkedHashMap<>();
-        series.put("whole group", new double[axis.size()]);
-        for (Fractions.Row r : rows) {
-            int i = plan.indicesAt(r.point())[0];
-            if (r.level().equals("group") && r.outcome().equals("bound")) {
-                series.get("whole group")[i] = r.fraction();
-            } else if (r.level().equals("member") && r.outcome().equals("bound")) {
-                series.computeIfAbsent(r.name(), k -> new double[axis.size()])[i] = r.fraction();
-            }
-        }
-        double[] x = axis.values().stream().mapToDouble(Double::doubleValue).toArray();
-        int c = 0;
-        for (Map.Entry<String, double[]> e : series.entrySet()) {
-            XYSeries s = chart.addSeries(e.getKey(), x, e.getValue());
-            s.setLineColor(PALETTE[c % PALETTE.length]);
-            s.setMarkerColor(PALETTE[c % PALETTE.length]);
-            s.setMarker(SeriesMarkers.CIRCLE);
-            s.setLineStyle(new BasicStroke(c == 0 ? 3.0f : 2.0f));
-            c++;
-        }
-        return chart;
-    }
-
-    static HeatMapChart mapChart(SweepPlan plan, List<Fractions.Row> rows) {
-        Axis ax = plan.axes().get(0);
-        Axis ay = plan.axes().get(1);
-        HeatMapChart chart = new HeatMapChartBuilder().width(900).height(700)
-                .title("Fraction of runs in which the group stays bound")
-                .xAxisTitle(label(ax.key())).yAxisTitle(label(ay.key())).build();
-        chart.getStyler().setChartBackgroundColor(Color.WHITE);
-        chart.getStyler().setChartTitleFont(TITLE);
-        chart.getStyler().setAxisTitleFont(LABEL);
-        chart.getStyler().setRangeColors(RAMP);
-        chart.getStyler().setMin(0.0);
-        chart.getStyler().setMax(1.0);
-        chart.getStyler().setShowValue(ax.size() * ay.size() <= 100);
-        chart.getStyler().setHeatMapValueDecimalPattern("0.00");
-        List<Number[]> heat = new ArrayList<>();
-        for (Fractions.Row r : rows) {
-            if (r.level().equals("group") && r.outcome().equals("bound")) {
-                int[] idx = plan.indicesAt(r.point());
-                heat.add(new Number[] {idx[0], idx[1], r.fraction()});
-            }
-        }
-        chart.addSeries("bound fraction", ticks(ax), ticks(ay), heat);
-        return chart;
-    }
-
-    private static List<String> ticks(Axis a) {
-        List<String> t = new ArrayList<>();
-        for (double v : a.values()) {
-            t.add(String.format(Locale.ROOT, "%.4g", v));
-        }
-        return t;
-    }
-
-    private static void style(XYChart chart) {
+        long runs = rows.isEmpty() ? 0 : rows.get(0).runs();
+        XYChart chart = Charts.lines("Who holds together (" + runs + " runs per value; bars: 95% Wilson intervals)",
+                label(axis.key()), "fraction of runs", 1000, 620);
         var s = chart.getStyler();
-        s.setChartBackgroundColor(Color.WHITE);
-        s.setPlotBackgroundColor(Color.WHITE);
-        s.setPlotGridLinesColor(new Color(0xDD, 0xDD, 0xDD));
-        s.setChartTitleFont(TITLE);
-        s.setAxisTitleFont(LABEL);
-        s.setAxisTickLabelsFont(LABEL.deriveFont(13f));
-        s.setLegendFont(LABEL.deriveFont(13f));
-        s.setYAxisMin(0.0);
-        s.setYAxisMax(1.0);
-        s.setYAxisDecimalPattern("0.0");
+        s.setYAxisMin(-0.02);
+        s.setYAxisMax(1.02);
+        s.setMarkerSize(7);
+        double[] x = axis.values().stream().mapToDouble(Double::doubleValue).toArray();
+        List<Curve> curves = curves(plan, rows);
+        // Curves often coincide (a host and its satellite, a pair of them): each is shifted a
+        // little sideways, so that every line and every interval stays visible.
+        double step = axis.size() > 1 ? minStep(axis) : 1.0;
+        double spread = Math.min(0.5, 0.04 * curves.size()) * step;
+        // interval bars first, so that every line is drawn over every bar; the group's last of all
+        for (int c = 0; c < curves.size(); c++) {
+            Curve cv = curves.get(c);
+            boolean isGroup = c == curves.size() - 1;
+            Color col = isGroup ? GROUP : Palette.member(c);
+            double dx = offset(c, curves.size(), spread);
+            // one series per curve: vertical bars, separated by gaps (NaN)
+            double[] bx = new double[3 * x.length];
+            double[] by = new double[3 * x.length];
+            for (int i = 0; i < x.length; i++) {
+                bx[3 * i] = x[i] + dx;
+                bx[3 * i + 1] = x[i] + dx;
+                bx[3 * i + 2] = x[i] + dx;
+                by[3 * i] = cv.low()[i];
+                by[3 * i + 1] = cv.high()[i];
+                by[3 * i + 2] = Double.NaN;
+            }
+            XYSeries bar = chart.addSeries(cv.name() + " 95%", bx, by);
+            bar.setLineColor(new Color(col.getRed(), col.getGreen(), col.getBlue(), isGroup ? 200 : 150));
+            bar.setLineStyle(new BasicStroke(isGroup ? 3.0f : 1.8f));
+            bar.setMarker(SeriesMarkers.NONE);
+            bar.setShowInLegend(false);
+        }
+        for (int c = 0; c < curves.size(); c++) {
+            Curve cv = curves.get(c);
+            boolean isGroup = c == curves.size() - 1;
+            Color col = isGroup ? GROUP : Palette.member(c);
+            double dx = offset(c, curves.size(), spread);
+            double[] xs = new double[x.length];
+            for (int i = 0; i < x.length; i++) {
+                xs[i] = x[i] + dx;
+            }
+            XYSeries line = chart.addSeries(cv.name(), xs, cv.y());
+            line.setLineColor(col);
+            line.setMarkerColor(col);
+            line.setMarker(isGroup ? SeriesMarkers.DIAMOND : SeriesMarkers.CIRCLE);
+            line.setLineStyle(new BasicStroke(isGroup ? 4.0f : 2.0f));
+        }
+        return chart;
+    }
+
+    /** The sideways shift of curve c of n: spread evenly over [-spread/2, spread/2]. */
+    static double offset(int c, int n, double spread) {
+        return n == 1 ? 0 : (c / (double) (n - 1) - 0.5) * spread;
+    }
+
+    /**
+     * The strip plot of fate times: one point per member and run with a time (merged, escaped,
+     * ripped, unbound), at its grid value, spread a little sideways by fate and by run so that
+     * equal times stay visible.
+     */
+    static XYChart timesChart(SweepPlan plan, List<RunRecord> records) {
+        Axis axis = plan.axes().get(0);
+        XYChart chart = Charts.lines("When members merged or left (every run, every member)", label(axis.key()),
+                "time of the fate [Gyr from today]", 1000, 620);
+        chart.getStyler().setMarkerSize(6);
+        double step = axis.size() > 1 ? minStep(axis) : 1.0;
+        List<String> order = List.of("merged", "escaped", "ripped", "unbound");
+        Map<String, List<double[]>> points = new LinkedHashMap<>();
+        order.forEach(f -> points.put(f, new ArrayList<>()));
+        int samples = Math.max(1, plan.samples());
+        for (RunRecord r : records) {
+            double x0 = plan.valuesAt(r.point())[0];
+            for (MemberFate m : r.outcome().members()) {
+                List<double[]> list = points.get(m.fate());
+                if (list == null || m.atGyr() == null) {
+                    continue;
+                }
+                int f = order.indexOf(m.fate());
+                double jitter = ((r.sample() + 0.5) / samples - 0.5) * 0.12;
+                list.add(new double[] {x0 + step * ((f - 1.5) * 0.14 + jitter), m.atGyr()});
+            }
+        }
+        boolean any = false;
+        for (Map.Entry<String, List<double[]>> e : points.entrySet()) {
+            if (e.getValue().isEmpty()) {
+                continue;
+            }
+            any = true;
+            double[] xs = e.getValue().stream().mapToDouble(p -> p[0]).toArray();
+            double[] ys = e.getValue().stream().mapToDouble(p -> p[1]).toArray();
+            XYSeries s = chart.addSeries(e.getKey() + " (" + xs.length + ")", xs, ys);
+            s.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Scatter);
+            Color c = FATE_COLOURS.get(e.getKey());
+            s.setMarkerColor(new Color(c.getRed(), c.getGreen(), c.getBlue(), 170));
+            s.setMarker(SeriesMarkers.CIRCLE);
+        }
+        if (!any) {
+            double[] xs = axis.values().stream().mapToDouble(Double::doubleValue).toArray();
+            XYSeries s = chart.addSeries("no member merged or left in any run", xs, new double[xs.length]);
+            s.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Scatter);
+            s.setMarkerColor(Palette.GUIDE);
+            s.setMarker(SeriesMarkers.NONE);
+        }
+        return chart;
+    }
+
+    private static double minStep(Axis a) {
+        double m = Double.POSITIVE_INFINITY;
+        List<Double> v = new ArrayList<>(a.values());
+        v.sort(Double::compare);
+        for (int i = 1; i < v.size(); i++) {
+            double d = v.get(i) - v.get(i - 1);
+            if (d > 0) {
+                m = Math.min(m, d);
+            }
+        }
+        return Double.isFinite(m) ? m : 1.0;
     }
 
     /** An axis label for a dotted key, with the unit its name carries. */
@@ -170,11 +252,5 @@ public final class SweepPlots {
             }
         }
         return null;
-    }
-
-    private static void save(org.knowm.xchart.internal.chartpart.Chart<?, ?> chart, Path file) throws IOException {
-        ByteArrayOutputStream buf = new ByteArrayOutputStream();
-        BitmapEncoder.saveBitmap(chart, buf, BitmapEncoder.BitmapFormat.PNG);
-        Outputs.writeAtomically(file, buf.toByteArray());
     }
 }

@@ -24,6 +24,7 @@ public final class SweepProgress implements Sweep.Listener {
     private long madeHere;
     private long startNanos;
     private long lastLine;
+    private boolean saving = true;
 
     /**
      * @param terminal draw a bar (true only for an interactive terminal)
@@ -65,6 +66,30 @@ public final class SweepProgress implements Sweep.Listener {
             lastLine = now;
             line(now);
         }
+    }
+
+    @Override
+    public boolean saving() {
+        return saving;
+    }
+
+    /**
+     * Stops saving runs (the sweep is being stopped) and says what was kept.
+     *
+     * @return "stopped: 18 of 70 runs saved; run the same command to go on"
+     */
+    public synchronized String stop() {
+        saving = false;
+        if (bar != null) {
+            bar.close();
+            bar = null;
+        }
+        return String.format(Locale.ROOT, "stopped: %d of %d runs saved; run the same command to go on", done, total);
+    }
+
+    /** Whether every run of the shard is saved. */
+    public synchronized boolean complete() {
+        return done >= total;
     }
 
     @Override

@@ -73,6 +73,32 @@ public final class Threshold {
     }
 
     /**
+     * The levels of f between which lies a 95% confidence interval for the median of the
+     * realisations' own critical values: with paired draws f(x) is the fraction of the n draws
+     * whose critical value lies on one side of x, a step function stepping at each of them, so
+     * its crossing of level (j - 1/2)/n is the j-th order statistic. The distribution-free
+     * interval for a median is [X_(j), X_(n+1-j)] with j - 1 the largest m where
+     * P(Bin(n, 1/2) &lt;= m) &lt;= 0.025, so that it covers at least 95% (Conover 1999,
+     * Practical Nonparametric Statistics, 3rd ed., section 3.2, the confidence interval for a
+     * quantile).
+     *
+     * @return {lower level, upper level}, or null when n is too small (under 6) for any such j
+     */
+    public static double[] medianLevels95(int n) {
+        org.apache.commons.math3.distribution.BinomialDistribution b =
+                new org.apache.commons.math3.distribution.BinomialDistribution(null, n, 0.5);
+        int m = -1;
+        while (m + 1 < n && b.cumulativeProbability(m + 1) <= 0.025) {
+            m++;
+        }
+        if (m < 0) {
+            return null;
+        }
+        int j = m + 1;
+        return new double[] {(j - 0.5) / n, (n + 1 - j - 0.5) / n};
+    }
+
+    /**
      * @param fraction f(x): the fraction of runs at x in which the outcome happens
      * @param lo low end of the range
      * @param hi high end of the range
@@ -81,6 +107,17 @@ public final class Threshold {
      * @throws NoChangeException if f - 1/2 has the same sign at both ends
      */
     public static Result find(DoubleUnaryOperator fraction, double lo, double hi, double tolerance, int maxEvaluations) {
+        return find(fraction, lo, hi, tolerance, maxEvaluations, 0.5);
+    }
+
+    /**
+     * The value at which f crosses another level than one half (f - level changes sign).
+     *
+     * @param level in (0, 1)
+     * @throws NoChangeException if f - level has the same sign at both ends
+     */
+    public static Result find(DoubleUnaryOperator fraction, double lo, double hi, double tolerance, int maxEvaluations,
+            double level) {
         if (!(lo < hi) || !(tolerance > 0)) {
             throw new IllegalArgumentException("need lo < hi and tolerance > 0");
         }
@@ -88,28 +125,28 @@ public final class Threshold {
         DoubleUnaryOperator f = x -> seen.computeIfAbsent(x, fraction::applyAsDouble);
         double fLo = f.applyAsDouble(lo);
         double fHi = f.applyAsDouble(hi);
-        if (Math.signum(fLo - 0.5) == Math.signum(fHi - 0.5) && fLo != 0.5) {
+        if (Math.signum(fLo - level) == Math.signum(fHi - level) && fLo != level) {
             throw new NoChangeException(fLo, fHi);
         }
         BisectionSolver solver = new BisectionSolver(tolerance);
         double root;
         try {
             // The solver counts calls, remembered ones included; allow for its repeats.
-            root = solver.solve(4 * maxEvaluations + 8, x -> f.applyAsDouble(x) - 0.5, lo, hi);
+            root = solver.solve(4 * maxEvaluations + 8, x -> f.applyAsDouble(x) - level, lo, hi);
         } catch (TooManyEvaluationsException e) {
             throw new IllegalStateException("no answer within " + maxEvaluations + " evaluations", e);
         }
-        double[] bracket = bracket(seen, root, lo, hi);
+        double[] bracket = bracket(seen, root, lo, hi, level);
         return new Result(bracket[0], bracket[1], root, fLo, fHi, seen);
     }
 
-    /** The neighbouring evaluated values across which the sign of f - 1/2 changes, nearest the root. */
-    static double[] bracket(TreeMap<Double, Double> seen, double root, double lo, double hi) {
+    /** The neighbouring evaluated values across which the sign of f - level changes, nearest the root. */
+    static double[] bracket(TreeMap<Double, Double> seen, double root, double lo, double hi, double level) {
         List<Map.Entry<Double, Double>> e = new ArrayList<>(seen.entrySet());
         List<double[]> changes = new ArrayList<>();
         for (int i = 0; i + 1 < e.size(); i++) {
-            double a = Math.signum(e.get(i).getValue() - 0.5);
-            double b = Math.signum(e.get(i + 1).getValue() - 0.5);
+            double a = Math.signum(e.get(i).getValue() - level);
+            double b = Math.signum(e.get(i + 1).getValue() - level);
             if (a != b) {
                 changes.add(new double[] {e.get(i).getKey(), e.get(i + 1).getKey()});
             }

@@ -4,7 +4,9 @@
  *
  * <p>A {@link org.holdfast.sweep.SweepPlan} names the grid ({@link org.holdfast.sweep.Axis}),
  * the samples per grid point, the master seed and the shard. Every run has an index
- * {@code run = point * samples + sample} and its own seed from {@link org.holdfast.sweep.SeedPlan}.
+ * {@code run = point * samples + sample}; its uncertain numbers take draw {@code sample} of the
+ * master seed at every point (paired draws, the default), or draw 0 of a seed of its own from
+ * {@link org.holdfast.sweep.SeedPlan} (independent draws).
  * Runs are executed by a {@link org.holdfast.sweep.SweepEngine} (threads here, Spark in
  * {@code org.holdfast.sweep.spark}) through a {@link org.holdfast.sweep.RunFunction}, the one
  * seam to the physics; each finished run is appended to a {@link org.holdfast.sweep.Journal},

@@ -59,21 +59,46 @@ class SweepCommandTest {
         assertEquals(0, r.exitCode(), r.err());
         List<List<String>> rows = SweepFiles.rows(tmp.resolve("a/results.csv"));
         assertEquals(1 + 5 * 4, rows.size());
-        assertEquals(List.of("point", "sample", "seed", "cosmology.dark_energy.w0", "toy.w_noise", "verdict",
-                "bound_until_gyr", "Orrimal.fate", "Orrimal.at_gyr", "Orrimal.with", "Vesk.fate", "Vesk.at_gyr",
-                "Vesk.with", "Tupala.fate", "Tupala.at_gyr", "Tupala.with", "energy_budget_error", "wall_s"), rows.get(0));
-        Set<String> seeds = new HashSet<>();
+        List<String> header = new ArrayList<>(List.of("point", "sample", "seed", "cosmology.dark_energy.w0",
+                "toy.w_noise", "verdict", "bound_until_gyr"));
+        for (String m : List.of("Orrimal", "Vesk", "Tupala")) {
+            for (String c : List.of("fate", "at_gyr", "left_gyr", "with", "together", "group", "bound_at_start")) {
+                header.add(m + "." + c);
+            }
+        }
+        header.addAll(List.of("energy_budget_error", "wall_s"));
+        assertEquals(header, rows.get(0));
+        Set<String> draws = new HashSet<>();
         for (int i = 1; i < rows.size(); i++) {
             List<String> row = rows.get(i);
             int point = Integer.parseInt(row.get(0));
             int sample = Integer.parseInt(row.get(1));
             assertEquals((i - 1) / 4, point, "rows sorted by point");
             assertEquals((i - 1) % 4, sample, "then by sample");
-            assertEquals(SeedPlan.seedOf(42, point, sample), Long.parseLong(row.get(2)));
+            assertEquals(42, Long.parseLong(row.get(2)), "paired draws: draw s of the master seed at every point");
             assertEquals(-1.3 + 0.1 * point, Double.parseDouble(row.get(3)), 1e-12);
-            seeds.add(row.get(2));
+            // Paired draws, visible in the table: sample s drew the same value at every grid point.
+            assertEquals(rows.get(1 + sample).get(4), row.get(4), "row " + i);
+            draws.add(row.get(4));
         }
-        assertEquals(5 * 4, seeds.size(), "every run has its own seed");
+        assertEquals(4, draws.size(), "four different draws, each the same at all five points");
+    }
+
+    @Test
+    void independentDrawsDifferBetweenGridPoints() throws IOException {
+        CommandRunner.Result r = sweep("ind", "--draws", "independent");
+        assertEquals(0, r.exitCode(), r.err());
+        List<List<String>> rows = SweepFiles.rows(tmp.resolve("ind/results.csv"));
+        Set<String> draws = new HashSet<>();
+        for (int i = 1; i < rows.size(); i++) {
+            List<String> row = rows.get(i);
+            assertEquals(SeedPlan.seedOf(42, Integer.parseInt(row.get(0)), Integer.parseInt(row.get(1))),
+                    Long.parseLong(row.get(2)));
+            draws.add(row.get(4));
+        }
+        assertEquals(20, draws.size(), "every run draws afresh");
+        assertBadInput("--draws: sometimes: choose paired or independent", "sweep", scenario.toString(), "--out",
+                tmp.resolve("bad-draws").toString(), "--draws", "sometimes");
     }
 
     @Test
@@ -98,10 +123,12 @@ class SweepCommandTest {
         }
         assertEquals(0.0, first);
         assertEquals(1.0, last);
-        assertTrue(Files.size(tmp.resolve("f/bound-fraction.png")) > 1000);
-        byte[] png = Files.readAllBytes(tmp.resolve("f/bound-fraction.png"));
-        assertEquals((byte) 0x89, png[0]);
-        assertEquals('P', png[1]);
+        for (String picture : List.of("fractions.png", "fate-times.png")) {
+            assertTrue(Files.size(tmp.resolve("f/" + picture)) > 1000, picture);
+            byte[] png = Files.readAllBytes(tmp.resolve("f/" + picture));
+            assertEquals((byte) 0x89, png[0]);
+            assertEquals('P', png[1]);
+        }
     }
 
     @Test
@@ -131,6 +158,81 @@ class SweepCommandTest {
         CommandRunner.Result again = sweep("merged");
         assertEquals(0, again.exitCode(), again.err());
         assertTrue(again.out().contains("0 made now, 20 already done"), again.out());
+    }
+
+    /**
+     * A sweep-merge stopped at any point leaves a folder the same command finishes: empty but for
+     * a temporary file, the plan alone, the plan and journal without tables, or a finished merge.
+     */
+    @Test
+    void aMergeStoppedPartWayIsFinishedByTheSameCommand() throws IOException {
+        assertEquals(0, sweep("whole", "--pair", "Vesk,Tupala").exitCode());
+        List<String> merge = new ArrayList<>(List.of("sweep-merge"));
+        for (int i = 1; i <= 2; i++) {
+            assertEquals(0, sweep("p" + i, "--shard", i + "/2", "--pair", "Vesk,Tupala").exitCode());
+            merge.add(tmp.resolve("p" + i).toString());
+        }
+        Path m = tmp.resolve("m");
+        merge.addAll(List.of("--out", m.toString()));
+        String[] cmd = merge.toArray(String[]::new);
+        Files.createDirectories(m);
+        Files.writeString(m.resolve("sweep.json.tmp"), "{ half a pl");
+        CommandRunner.Result first = CommandRunner.run(cmd);
+        assertEquals(0, first.exitCode(), first.err());
+        List<String> expected = SweepFiles.resultsWithoutWall(tmp.resolve("whole"));
+        String fractions = Files.readString(tmp.resolve("whole/fractions.csv"));
+        assertTrue(fractions.contains(",pair,Vesk+Tupala,together,"), "the shards' pairs are counted");
+        assertEquals(expected, SweepFiles.resultsWithoutWall(m));
+        // killed after the plan, before the journal and the tables
+        Files.delete(m.resolve("runs.jsonl"));
+        Files.delete(m.resolve("results.csv"));
+        Files.delete(m.resolve("fractions.csv"));
+        CommandRunner.Result again = CommandRunner.run(cmd);
+        assertEquals(0, again.exitCode(), again.err());
+        assertEquals(expected, SweepFiles.resultsWithoutWall(m));
+        assertEquals(fractions, Files.readString(m.resolve("fractions.csv")));
+        // killed after the journal, before the tables; and a finished merge run once more
+        Files.delete(m.resolve("results.csv"));
+        assertEquals(0, CommandRunner.run(cmd).exitCode());
+        assertEquals(0, CommandRunner.run(cmd).exitCode());
+        assertEquals(expected, SweepFiles.resultsWithoutWall(m));
+        // a folder that holds another sweep is still refused
+        assertEquals(0, CommandRunner.run("sweep", scenario.toString(), "--out", tmp.resolve("x-other").toString(),
+                "--vary", "cosmology.dark_energy.w0=-1.2,-1.0").exitCode());
+        assertBadInput("--out: " + tmp.resolve("x-other") + ": already holds a different sweep", cmd[0], cmd[1],
+                cmd[2], "--out", tmp.resolve("x-other").toString());
+    }
+
+    @Test
+    void pairsAndTogetherAreCountedSymmetricallyAndUnknownNamesGetASuggestion() throws IOException {
+        assertEquals(0, sweep("ab", "--pair", "Vesk,Tupala").exitCode());
+        assertEquals(0, sweep("ba", "--pair", "Tupala,Vesk").exitCode());
+        List<List<String>> ab = SweepFiles.rows(tmp.resolve("ab/fractions.csv"));
+        List<List<String>> ba = SweepFiles.rows(tmp.resolve("ba/fractions.csv"));
+        int pairs = 0;
+        for (int i = 1; i < ab.size(); i++) {
+            if (ab.get(i).get(2).equals("pair")) {
+                assertEquals("Vesk+Tupala", ab.get(i).get(3));
+                assertEquals("Tupala+Vesk", ba.get(i).get(3));
+                assertEquals(ab.get(i).subList(4, 10), ba.get(i).subList(4, 10), "symmetric in A and B");
+                pairs++;
+            } else {
+                assertEquals(ab.get(i), ba.get(i));
+            }
+        }
+        assertEquals(5, pairs, "one pair row per grid point");
+        assertTrue(ab.stream().anyMatch(r -> r.get(3).equals("Tupala") && r.get(4).equals("together")));
+        assertBadInput("--pair: Vesc: no such member (did you mean 'Vesk'?)", "sweep", scenario.toString(), "--out",
+                tmp.resolve("bad-pair").toString(), "--pair", "Vesc,Tupala");
+        assertBadInput("--pair: Vesk,Vesk: names the same member twice", "sweep", scenario.toString(), "--out",
+                tmp.resolve("bad-pair").toString(), "--pair", "Vesk,Vesk");
+        assertBadInput("--vary: galaxy.Vesc.mass_msun: no such key in this scenario (did you mean "
+                + "'galaxy.Vesk.mass_msun'?)", "sweep", scenario.toString(), "--out", tmp.resolve("bad-pair").toString(),
+                "--vary", "galaxy.Vesc.mass_msun=1e10,1e11");
+        assertBadInput("--set: galaxy.Tupalla.mass_msun: no such key in this scenario (did you mean "
+                + "'galaxy.Tupala.mass_msun'?)", "sweep", scenario.toString(), "--out", tmp.resolve("bad-pair").toString(),
+                "--set", "galaxy.Tupalla.mass_msun=1e10");
+        assertFalse(Files.exists(tmp.resolve("bad-pair")), "nothing written");
     }
 
     @Test
@@ -185,7 +287,7 @@ class SweepCommandTest {
                 "--workers", "2");
         assertEquals(0, r.exitCode(), r.err());
         assertEquals(1 + 12, SweepFiles.rows(tmp.resolve("map/results.csv")).size());
-        assertTrue(Files.size(tmp.resolve("map/bound-map.png")) > 1000);
+        assertTrue(Files.size(tmp.resolve("map/map.png")) > 1000);
     }
 
     private void assertBadInput(String expected, String... args) {

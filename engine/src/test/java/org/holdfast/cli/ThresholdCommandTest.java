@@ -85,6 +85,41 @@ class ThresholdCommandTest {
         assertTrue(r.out().contains("bracket"), r.out());
     }
 
+    /**
+     * A critical curve with 10 paired draws: at each mass the draws' own critical values are
+     * c_s = w_c(m) - noise_s, known exactly from the toy; the curve's point is their median and
+     * its interval [c_(2), c_(9)], the distribution-free 95% interval for a median of 10
+     * (Conover 1999, Practical Nonparametric Statistics, 3rd ed., section 3.2: coverage
+     * 1 - 2 P(Bin(10, 1/2) &lt;= 1) = 97.9%).
+     */
+    @Test
+    void aCriticalCurveWithPairedDrawsGivesTheMedianAndItsOrderStatisticInterval() throws Exception {
+        Path out = tmp.resolve("curve");
+        CommandRunner.Result r = CommandRunner.run("threshold", scenario.toString(), "--vary",
+                "cosmology.dark_energy.w0=-1.6:-0.9", "--along", "galaxy.Vesk.mass_msun=1e11,1e12", "--member", "Vesk",
+                "--fate", "ripped", "--within-gyr", "200", "--samples", "10", "--tolerance", "1e-4", "--out",
+                out.toString(), "--workers", "2");
+        assertEquals(0, r.exitCode(), r.err());
+        java.util.List<java.util.List<String>> rows = org.holdfast.sweep.SweepFiles.rows(out.resolve("critical-curve.csv"));
+        assertEquals(3, rows.size());
+        for (java.util.List<String> row : rows.subList(1, 3)) {
+            double m = Double.parseDouble(row.get(0));
+            double[] c = new double[10];
+            for (int s = 0; s < 10; s++) {
+                c[s] = ToyRunFunction.criticalW(m) - ToyRunFunction.noise(1, s);
+            }
+            java.util.Arrays.sort(c);
+            double value = Double.parseDouble(row.get(2));
+            assertTrue(c[4] - 1e-4 <= value && value <= c[5] + 1e-4, row + " vs " + java.util.Arrays.toString(c));
+            assertEquals(c[1], Double.parseDouble(row.get(7)), 1e-4, row.toString());
+            assertEquals(c[8], Double.parseDouble(row.get(8)), 1e-4, row.toString());
+            assertEquals("10", row.get(9));
+        }
+        assertEquals(null, org.holdfast.sweep.Threshold.medianLevels95(5), "5 draws are too few for a 95% interval");
+        assertEquals(java.util.List.of(1.5 / 10, 8.5 / 10),
+                java.util.Arrays.stream(org.holdfast.sweep.Threshold.medianLevels95(10)).boxed().toList());
+    }
+
     @Test
     void badInputIsExitCodeTwo() {
         String s = scenario.toString();

@@ -91,12 +91,33 @@ class AxisAndSeedTest {
             for (RunTask t : tasks) {
                 assertTrue(!seen.get((int) t.run()), "run " + t.run() + " in two shards");
                 seen.set((int) t.run());
-                assertEquals(SeedPlan.seedOf(1, t.point(), t.sample()), t.seed());
+                // paired draws: sample s is draw s of the master seed at every point
+                assertEquals(1, t.seed());
+                assertEquals(t.sample(), t.draw());
             }
             count += tasks.size();
         }
         assertEquals(21, count);
         assertEquals(21, seen.cardinality());
+    }
+
+    @Test
+    void independentDrawsGiveEveryRunItsOwnSeedAndPairedDrawsShareThemAcrossPoints() {
+        SweepPlan paired = plan(List.of(Axis.parse("a=1:2:3")), 4, 1, 1);
+        SweepPlan independent = new SweepPlan(SweepPlan.FORMAT, "x.toml", "00", Map.of(), paired.axes(), 4, true, 1,
+                null, false, 1, 1, SweepPlan.INDEPENDENT, List.of(), null);
+        assertNotEquals(null, paired.differenceFrom(independent), "the two are different sweeps");
+        Set<Long> seeds = new HashSet<>();
+        for (RunTask t : independent.pendingTasks(new BitSet())) {
+            assertEquals(SeedPlan.seedOf(1, t.point(), t.sample()), t.seed());
+            assertEquals(0, t.draw());
+            seeds.add(t.seed());
+        }
+        assertEquals(12, seeds.size());
+        for (RunTask t : paired.pendingTasks(new BitSet())) {
+            assertEquals(1, t.seed());
+            assertEquals(t.sample(), t.draw());
+        }
     }
 
     static SweepPlan plan(List<Axis> axes, int samples, int shard, int shards) {

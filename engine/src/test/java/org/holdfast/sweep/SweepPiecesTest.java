@@ -78,7 +78,7 @@ class SweepPiecesTest {
     void snapshotsGoToOneFolderPerRunOnlyWhenAsked() throws Exception {
         Path scenario = ToyRunFunction.writeScenario(tmp);
         List<String> seen = Collections.synchronizedList(new ArrayList<>());
-        RunFunction recorder = (s, o, seed, sample, until, snaps) -> {
+        RunFunction recorder = (s, o, seed, draw, sample, until, snaps) -> {
             seen.add(String.valueOf(snaps));
             return new RunOutcome("bound", null, List.of(new MemberFate("Quell", "bound", null, null)), 0, 0, null);
         };

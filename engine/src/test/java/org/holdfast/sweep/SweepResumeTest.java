@@ -51,8 +51,10 @@ class SweepResumeTest {
         int recorded = Journal.read(out).size();
         assertTrue(recorded >= 10 && recorded < 54, "killed mid-sweep, with " + recorded + " of 54 runs recorded");
         assertFalse(Files.exists(out.resolve(ResultsTable.FILE)), "no results from a killed sweep");
-        Set<Long> seedsBefore = new HashSet<>();
-        Journal.read(out).forEach(r -> seedsBefore.add(r.seed()));
+        // A run is known by its seed, draw and w0 (with paired draws the seed is the same for all).
+        List<Double> w0 = Axis.parse("w0=-1.3:-0.9:9").values();
+        Set<String> runsBefore = new HashSet<>();
+        Journal.read(out).forEach(r -> runsBefore.add(r.seed() + " " + r.sample() + " " + w0.get(r.point())));
 
         Path calls2 = tmp.resolve("calls-2.txt");
         Process second = new ProcessBuilder(command(scenario, out, calls2)).redirectErrorStream(true)
@@ -67,8 +69,9 @@ class SweepResumeTest {
         assertEquals(54, runs.size(), "no run recorded twice");
         List<String> made = Files.readAllLines(calls2);
         assertEquals(54 - recorded, made.size(), "the restart made only the missing runs");
+        assertEquals(54 - recorded, new HashSet<>(made).size(), "no run made twice by the restart");
         for (String s : made) {
-            assertFalse(seedsBefore.contains(Long.parseLong(s)), "run with seed " + s + " was made again");
+            assertFalse(runsBefore.contains(s), "run (seed, draw, w0) = " + s + " was made again");
         }
 
         RunFunctions.install(new ToyRunFunction());
@@ -81,6 +84,85 @@ class SweepResumeTest {
         } finally {
             RunFunctions.install(null);
         }
+    }
+
+    /**
+     * Ctrl+C (SIGINT) in the middle of a sweep: exit 130 and one line that says how many runs were
+     * saved, which is exactly what the journal holds; the same command then finishes the sweep.
+     */
+    @Test
+    void anInterruptedSweepSaysWhatItKept() throws Exception {
+        Path scenario = ToyRunFunction.writeScenario(tmp);
+        Path out = tmp.resolve("interrupted");
+        Path journal = out.resolve(Journal.FILE);
+        Path log = tmp.resolve("log-int.txt");
+        Process p = new ProcessBuilder(command(scenario, out, tmp.resolve("calls-int.txt")))
+                .redirectErrorStream(true).redirectOutput(log.toFile()).start();
+        long deadline = System.nanoTime() + TimeUnit.SECONDS.toNanos(60);
+        while (lines(journal) < 6 && p.isAlive() && System.nanoTime() < deadline) {
+            Thread.sleep(5);
+        }
+        Process kill = new ProcessBuilder("kill", "-INT", Long.toString(p.pid())).start();
+        assertTrue(kill.waitFor(10, TimeUnit.SECONDS));
+        assertTrue(p.waitFor(60, TimeUnit.SECONDS));
+        String text = Files.readString(log);
+        assertEquals(130, p.exitValue(), text);
+        int saved = Journal.read(out).size();
+        assertTrue(saved >= 6 && saved < 54, saved + " runs saved");
+        assertTrue(text.contains("stopped: " + saved + " of 54 runs saved; run the same command to go on"), text);
+        assertFalse(text.contains("Exception"), text);
+        Process again = new ProcessBuilder(command(scenario, out, tmp.resolve("calls-int-2.txt")))
+                .redirectErrorStream(true).redirectOutput(tmp.resolve("log-int-2.txt").toFile()).start();
+        assertTrue(again.waitFor(120, TimeUnit.SECONDS));
+        assertEquals(0, again.exitValue());
+        assertEquals(54 - saved, Files.readAllLines(tmp.resolve("calls-int-2.txt")).size());
+    }
+
+    /**
+     * sweep-merge killed (SIGKILL) at seeded random moments, again and again into the same folder,
+     * then run to the end: the same command always finishes it, and the result equals the sweep
+     * made whole.
+     */
+    @Test
+    void aMergeKilledAtRandomMomentsIsFinishedByTheSameCommand() throws Exception {
+        Path scenario = ToyRunFunction.writeScenario(tmp);
+        RunFunctions.install(new ToyRunFunction());
+        List<String> merge = new ArrayList<>(List.of("sweep-merge"));
+        Path whole = tmp.resolve("whole");
+        try {
+            List<String> base = command(scenario, whole, tmp.resolve("unused"));
+            List<String> args = new ArrayList<>(base.subList(7, base.size()));
+            assertEquals(0, CommandRunner.run(args.toArray(String[]::new)).exitCode());
+            for (int i = 1; i <= 3; i++) {
+                List<String> shard = new ArrayList<>(args);
+                shard.set(shard.indexOf("--out") + 1, tmp.resolve("shard" + i).toString());
+                shard.addAll(List.of("--shard", i + "/3"));
+                assertEquals(0, CommandRunner.run(shard.toArray(String[]::new)).exitCode());
+                merge.add(tmp.resolve("shard" + i).toString());
+            }
+        } finally {
+            RunFunctions.install(null);
+        }
+        Path out = tmp.resolve("merged");
+        merge.addAll(List.of("--out", out.toString()));
+        String java = Path.of(System.getProperty("java.home"), "bin", "java").toString();
+        List<String> cmd = new ArrayList<>(List.of(java, "-Xmx256m", "-cp", System.getProperty("java.class.path"),
+                ToySweepMain.class.getName(), "0", tmp.resolve("merge-calls").toString()));
+        cmd.addAll(merge);
+        java.util.Random random = new java.util.Random(18);
+        for (int round = 0; round < 4; round++) {
+            Process p = new ProcessBuilder(cmd).redirectErrorStream(true)
+                    .redirectOutput(tmp.resolve("merge-" + round + ".log").toFile()).start();
+            Thread.sleep(300 + random.nextInt(1500));
+            p.destroyForcibly();
+            assertTrue(p.waitFor(30, TimeUnit.SECONDS));
+        }
+        Process last = new ProcessBuilder(cmd).redirectErrorStream(true)
+                .redirectOutput(tmp.resolve("merge-last.log").toFile()).start();
+        assertTrue(last.waitFor(120, TimeUnit.SECONDS));
+        assertEquals(0, last.exitValue(), Files.readString(tmp.resolve("merge-last.log")));
+        assertEquals(SweepFiles.resultsWithoutWall(whole), SweepFiles.resultsWithoutWall(out));
+        assertEquals(Files.readString(whole.resolve(Fractions.FILE)), Files.readString(out.resolve(Fractions.FILE)));
     }
 
     private static long lines(Path f) throws IOException {

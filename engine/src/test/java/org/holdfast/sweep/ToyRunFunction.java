@@ -26,7 +26,7 @@ import org.holdfast.scenario.ScenarioFile;
  * fail as they would in a real run. A member of mass m is ripped when the effective
  * w = w0 + noise lies below w_c(m) = -1 - 0.1 log10(m / 1e10), at the toy time
  * t(w) = 28 / (3 |1 + w|) Gyr, if that is before the end of the run; otherwise it stays bound.
- * With sampling, noise ~ N(0, 0.03) is drawn from the run's seed and reported as the sampled
+ * With sampling, noise ~ N(0, 0.03) is drawn from the run's seed and draw index and reported as the sampled
  * value "toy.w_noise".
  */
 public final class ToyRunFunction implements RunFunction {
@@ -43,7 +43,7 @@ public final class ToyRunFunction implements RunFunction {
 
     /**
      * @param sleepMs time each run takes
-     * @param callLog file that gets one line ("seed") per finished call; null for none
+     * @param callLog file that gets one line ("seed draw w0") per finished call; null for none
      */
     public ToyRunFunction(long sleepMs, String callLog) {
         this.sleepMs = sleepMs;
@@ -55,13 +55,19 @@ public final class ToyRunFunction implements RunFunction {
         return -1 - 0.1 * Math.log10(massMsun / 1e10);
     }
 
+    /** The toy's noise on w for a seed and draw. */
+    public static double noise(long seed, long draw) {
+        return 0.03 * ZigguratSampler.NormalizedGaussian.of(
+                RandomSource.L64_X128_MIX.create(seed ^ (0x9E3779B97F4A7C15L * (draw + 1)))).sample();
+    }
+
     /** The toy's rip time at effective w. */
     public static double ripTimeGyr(double w) {
         return 28.0 / (3 * Math.abs(1 + w));
     }
 
     @Override
-    public RunOutcome run(Path scenario, Overrides overrides, long seed, boolean sample, double untilGyr, Path snapshotDir) {
+    public RunOutcome run(Path scenario, Overrides overrides, long seed, long draw, boolean sample, double untilGyr, Path snapshotDir) {
         Node root = ScenarioFile.open(scenario, overrides);
         Node cosmology = root.requireTable("cosmology");
         cosmology.number("h0");
@@ -76,7 +82,7 @@ public final class ToyRunFunction implements RunFunction {
         double noise = 0;
         Map<String, Double> sampled = new TreeMap<>();
         if (sample) {
-            noise = 0.03 * ZigguratSampler.NormalizedGaussian.of(RandomSource.L64_X128_MIX.create(seed)).sample();
+            noise = noise(seed, draw);
             sampled.put("toy.w_noise", noise);
         }
         double w = w0 + noise;
@@ -104,7 +110,7 @@ public final class ToyRunFunction implements RunFunction {
         }
         if (callLog != null) {
             try {
-                Files.writeString(Path.of(callLog), seed + "\n", StandardCharsets.UTF_8, StandardOpenOption.CREATE,
+                Files.writeString(Path.of(callLog), seed + " " + draw + " " + w0 + "\n", StandardCharsets.UTF_8, StandardOpenOption.CREATE,
                         StandardOpenOption.APPEND);
             } catch (IOException e) {
                 throw new UncheckedIOException(e);

@@ -1,8 +1,6 @@
 package org.holdfast.sweep.spark;
 
 import java.io.IOException;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.function.Consumer;
@@ -15,9 +13,9 @@ import org.holdfast.sweep.RunTask;
 import org.holdfast.sweep.SweepEngine;
 
 /**
- * Makes the runs as Spark tasks, one run per task. The scenario's text travels with the job
- * (executors need not see the driver's files); each executor writes it to a local temporary
- * file once. Runs go out in batches; each batch's records come back to the driver, which
+ * Makes the runs as Spark tasks, one run per task. The scenario's text and every file it refers
+ * to (a w(a) table) travel with the job ({@link ScenarioShipment}; executors need not see the
+ * driver's files); each executor writes them to a local temporary folder once. Runs go out in batches; each batch's records come back to the driver, which
  * appends them to the journal, so a stopped Spark sweep resumes like a local one and loses at
  * most the batch in flight.
  */
@@ -43,8 +41,11 @@ public final class SparkEngine implements SweepEngine {
             conf.setMaster(master);
         }
         conf.setIfMissing("spark.ui.enabled", "false");
-        ScenarioShipment shipment = new ScenarioShipment(scenario.getFileName().toString(),
-                Files.readString(scenario, StandardCharsets.UTF_8));
+        java.util.Set<String> values = new java.util.LinkedHashSet<>();
+        for (RunTask t : tasks) {
+            values.addAll(t.overrides().values());
+        }
+        ScenarioShipment shipment = ScenarioShipment.of(scenario, values);
         try (JavaSparkContext sc = new JavaSparkContext(conf)) {
             int cores = Math.max(1, sc.defaultParallelism());
             int batch = cores * BATCH_PER_CORE;

@@ -79,6 +79,42 @@ class SparkEngineTest {
         }
     }
 
+    /**
+     * The real physics under Spark, with a scenario that reads a w(a) table from a file beside it:
+     * the executors get the table too, and the tables equal the local engine's (but for wall_s).
+     */
+    @Test
+    void sparkShipsTheFilesAScenarioRefersToAndMatchesTheLocalEngineThroughTheRealPhysics() throws Exception {
+        RunFunctions.install(null);
+        Path data = tmp.resolve("data");
+        Files.createDirectories(data);
+        Files.copy(Path.of("../scenarios/drifting-w.csv"), data.resolve("drifting-w.csv"));
+        String pair = Files.readString(Path.of("../scenarios/tethered-pair.toml"))
+                .replace("w0 = -1.0\nwa = 0.0", "table = \"drifting-w.csv\"");
+        assertTrue(pair.contains("table = \"drifting-w.csv\""), "the scenario reads the table");
+        Path real = data.resolve("drifting-pair.toml");
+        Files.writeString(real, pair);
+        List<String> args = new ArrayList<>(List.of("sweep", real.toString(), "--vary",
+                "galaxy.Wrenna.mass_msun=2e11,4e11", "--vary", "galaxy.Wrenna.velocity_kms.1=100,129.05",
+                "--set", "galaxy.Harl.mass_msun={ median = 1.2e12, sigma_dex = 0.1 }", "--samples", "2",
+                "--until", "20", "--seed", "11", "--workers", "2", "--pair", "Harl,Wrenna"));
+        List<String> local = new ArrayList<>(args);
+        local.addAll(List.of("--out", tmp.resolve("real-local").toString()));
+        CommandRunner.Result l = CommandRunner.run(local.toArray(String[]::new));
+        assertEquals(0, l.exitCode(), l.err());
+        List<String> spark = new ArrayList<>(args);
+        spark.addAll(List.of("--out", tmp.resolve("real-spark").toString(), "--engine", "spark", "--spark-master",
+                "local[2]"));
+        CommandRunner.Result s = CommandRunner.run(spark.toArray(String[]::new));
+        assertEquals(0, s.exitCode(), s.err());
+        assertTrue(s.out().contains("8 made now"), s.out());
+        List<String> rows = SweepFiles.resultsWithoutWall(tmp.resolve("real-local"));
+        assertEquals(rows, SweepFiles.resultsWithoutWall(tmp.resolve("real-spark")));
+        assertTrue(rows.get(0).contains("galaxy.Harl.mass_msun"), "the drawn mass is a column: " + rows.get(0));
+        assertEquals(Files.readString(tmp.resolve("real-local/fractions.csv")),
+                Files.readString(tmp.resolve("real-spark/fractions.csv")));
+    }
+
     @Test
     void sparkAndLocalEnginesGiveTheSameTables() throws Exception {
         CommandRunner.Result local = sweep("local");
