@@ -65,7 +65,8 @@ public final class TidalRadius {
                 hi = mid;
             }
         }
-        return Math.sqrt(lo * hi);
+        double rt = Math.sqrt(lo * hi);
+        return rt >= satellite.extentKpc() ? Double.POSITIVE_INFINITY : rt;
     }
 
     /** The mass a satellite keeps at a tidal radius: its own profile's mass inside it. */
