@@ -69,6 +69,27 @@ public final class TidalRadius {
         return rt >= satellite.extentKpc() ? Double.POSITIVE_INFINITY : rt;
     }
 
+    /**
+     * Whether the host's tide at distance D could strip the satellite inside {@code rKpc}, the
+     * radius it is already cut to: whether m(&lt;r)/r^3 falls below (3 - gamma) M(D)/D^3 there.
+     * A cheap test before {@link #of}; false when there is no tide.
+     */
+    public static boolean reaches(HaloProfile satellite, HaloProfile host, double hostScale, double dKpc, double rKpc) {
+        double mHost = hostScale * host.enclosedMass(dKpc);
+        if (!(mHost > 0) || !(dKpc > 0)) {
+            return false;
+        }
+        double rho = host.density(dKpc);
+        double gamma = Double.isFinite(rho) ? 4 * Math.PI * dKpc * dKpc * dKpc * hostScale * rho / mHost : 0;
+        if (!(gamma < 3)) {
+            return false;
+        }
+        if (!(rKpc < Double.POSITIVE_INFINITY)) {
+            return true;
+        }
+        return meanDensityTerm(satellite, rKpc) < (3 - gamma) * mHost / (dKpc * dKpc * dKpc);
+    }
+
     /** The mass a satellite keeps at a tidal radius: its own profile's mass inside it. */
     public static double boundMass(HaloProfile satellite, double rtKpc) {
         if (!(rtKpc < Double.POSITIVE_INFINITY)) {

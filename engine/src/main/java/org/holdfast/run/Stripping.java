@@ -44,7 +44,7 @@ final class Stripping {
             if (!(own.extentKpc() > 0)) {
                 continue; // a bare point has nothing to strip
             }
-            double rCur = tidalRadius.getOrDefault(b.name[i], Double.POSITIVE_INFINITY);
+            double rCur = tidalRadius.getOrDefault(b.name[i], own.extentKpc());
             double rt = rCur;
             int host = -1;
             for (int j = 0; j < b.count(); j++) {
@@ -56,7 +56,11 @@ final class Stripping {
                 if (extent > 0 && d >= extent) {
                     continue;
                 }
-                double r = TidalRadius.of(own, b.halo[j], b.mass[j] / b.halo[j].mass(), d);
+                double scale = b.mass[j] / b.halo[j].mass();
+                if (!TidalRadius.reaches(own, b.halo[j], scale, d, rt)) {
+                    continue; // this tide cannot cut deeper than the radius already reached
+                }
+                double r = TidalRadius.of(own, b.halo[j], scale, d);
                 if (r < rt) {
                     rt = r;
                     host = j;
