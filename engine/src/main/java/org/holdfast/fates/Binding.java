@@ -135,6 +135,15 @@ public final class Binding {
         return kPerGyr2 > 0 ? Math.cbrt(Units.G * massMsun / kPerGyr2) : Double.POSITIVE_INFINITY;
     }
 
+    /**
+     * Separation minus the zero-gravity radius, kpc: a switching function that crosses zero,
+     * upward, when a member actually leaves (the leaving time of {@link MemberFate#leftGyr});
+     * -infinity where k &le; 0 (no such radius).
+     */
+    public static double zeroGravityExcess(double massMsun, double kPerGyr2, double[] dx) {
+        return norm(dx) - zeroGravityRadius(massMsun, kPerGyr2);
+    }
+
     /** |r x v|^2, kpc^4/Gyr^2. */
     public static double angularMomentumSquared(double[] dx, double[] dv) {
         double lx = dx[1] * dv[2] - dx[2] * dv[1];

@@ -302,7 +302,7 @@ public final class FateTracker implements RunObserver {
         }
         lastAlone = alone;
         lastPartner = partner;
-        verdict = !everPair ? Verdict.UNBOUND
+        verdict = tracks.size() == 1 ? Verdict.BOUND : !everPair ? Verdict.UNBOUND
                 : alone != null ? Verdict.DISSOLVED : anyOutside ? Verdict.PARTLY_BOUND : Verdict.BOUND;
         return out;
     }
