@@ -16,10 +16,13 @@ import org.holdfast.halos.TidalRadius;
  * dynamical friction, mergers and binding) is that bound mass; its pair kernel keeps its shape
  * per unit mass product (a documented simplification: the far field, -G m M / d, is exact).
  *
- * <p>The stripped mass joins the host whose tide took it, with the satellite's position and
- * velocity (the debris settles into the host's halo), so total mass, momentum and the centre
- * of mass are kept exactly; the change of the energy budget this makes is booked, as a merger's
- * is, so the budget stays a measure of the integration's accuracy. A satellite stripped below
+ * <p>The stripped mass joins the host whose tide took it, with the satellite's momentum (the
+ * debris settles into the host's halo), so total mass and momentum are kept exactly. The host
+ * keeps its position, so every path stays continuous with x' = v (snapshots interpolate
+ * smoothly); the centre of mass shifts by dm (x_sat - x_host) / M_total, which no relative
+ * motion feels: the pair forces, the friction and the background term k r (linear) depend only
+ * on relative positions and velocities. The change of the energy budget this makes is booked,
+ * as a merger's is, so the budget stays a measure of the integration's accuracy. A satellite stripped below
  * {@link #DISRUPTED} of its mass has come apart in its host and is merged into it (from memory:
  * semi-analytic models count a satellite stripped to a per cent or so of its mass as disrupted).
  */
@@ -121,12 +124,9 @@ final class Stripping {
         return best;
     }
 
-    /** Moves mass dm from satellite i to host j, keeping total mass, momentum and centre of mass. */
+    /** Moves mass dm from satellite i to host j, keeping total mass and momentum and every position. */
     private static void transfer(Bodies b, int i, int j, double dm) {
         double mj = b.mass[j] + dm;
-        b.x[j] = (b.mass[j] * b.x[j] + dm * b.x[i]) / mj;
-        b.y[j] = (b.mass[j] * b.y[j] + dm * b.y[i]) / mj;
-        b.z[j] = (b.mass[j] * b.z[j] + dm * b.z[i]) / mj;
         b.vx[j] = (b.mass[j] * b.vx[j] + dm * b.vx[i]) / mj;
         b.vy[j] = (b.mass[j] * b.vy[j] + dm * b.vy[i]) / mj;
         b.vz[j] = (b.mass[j] * b.vz[j] + dm * b.vz[i]) / mj;
