@@ -78,8 +78,8 @@ class MergerTimeTest {
     }
 
     /**
-     * Reached: within 25% of the fit for circularities 0.3-0.6 and mass ratios 1:10-1:30
-     * (measured 1.04, 0.78, 0.97, 1.16 of it). Why not closer: the fit itself is a smooth form
+     * Reached: within 15% of the fit for circularities 0.3-0.6 and mass ratios 1:10-1:30
+     * (measured 1.13, 0.90, 1.03, 1.06 of it). Why not closer: the fit itself is a smooth form
      * through scattered N-body times, and our satellite is a point with a bound mass, not a
      * resolved halo; its circularity dependence is the main difference (next test).
      */
@@ -89,16 +89,18 @@ class MergerTimeTest {
         double expected = bk08(ratio, eta, tauDyn());
         double[] r = mergerTime(ratio, eta, true, 2 * expected);
         assertTrue(!Double.isNaN(r[0]), "no merger within " + 2 * expected + " Gyr");
-        assertEquals(1.0, r[0] / expected, 0.25, "merger at " + r[0] + " Gyr, fit " + expected);
+        System.out.printf(java.util.Locale.ROOT, "1:%.0f eta %.1f: merged at %.2f Gyr, fit %.2f Gyr (%.3f of it)%n",
+                ratio, eta, r[0], expected, r[0] / expected);
+        assertEquals(1.0, r[0] / expected, 0.15, "merger at " + r[0] + " Gyr, fit " + expected);
         assertTrue(r[2] < 1e-4, "energy budget residual " + r[2]);
     }
 
     /**
      * Near-circular orbits: the fit's exp(1.9 eta) makes eta = 0.9 take 3.1 times as long as
      * eta = 0.3; Jiang et al. 2008 (ApJ 675, 1095, their abstract) find a much weaker
-     * dependence, 0.94 eps^0.60 + 0.60, a factor 1.40 between the same circularities. Ours (1.48
+     * dependence, 0.94 eps^0.60 + 0.60, a factor 1.40 between the same circularities. Ours (1.49
      * measured) follows the latter within 15%; at eta = 0.9 we therefore merge in about half of
-     * BK08's time (0.49 of it measured at 1:10) - the spread between the two calibrations.
+     * BK08's time (0.54 of it measured at 1:10) - the spread between the two calibrations.
      */
     @org.junit.jupiter.api.Test
     void theCircularityDependenceIsJiangEtAls() {
@@ -107,6 +109,8 @@ class MergerTimeTest {
         double high = mergerTime(10, 0.9, true, 2 * bk08(10, 0.9, tau))[0];
         double jiang = (0.94 * Math.pow(0.9, 0.6) + 0.6) / (0.94 * Math.pow(0.3, 0.6) + 0.6);
         assertEquals(1.40, jiang, 0.01);
+        System.out.printf(java.util.Locale.ROOT, "eta 0.3: %.2f Gyr, eta 0.9: %.2f Gyr, ratio %.3f (Jiang et al. %.3f)%n",
+                low, high, high / low, jiang);
         assertEquals(jiang, high / low, 0.15 * jiang, "t(0.9) " + high + " Gyr, t(0.3) " + low + " Gyr");
     }
 }
