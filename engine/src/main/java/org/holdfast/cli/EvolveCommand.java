@@ -134,7 +134,7 @@ public final class EvolveCommand implements Callable<Integer> {
         o.println("Timeline:");
         o.print(FateReport.timeline(r.events()));
         o.println();
-        List<String> files = new ArrayList<>(List.of("summary.json", "tracks.csv", "snapshots/"));
+        List<String> files = new ArrayList<>(List.of("summary.json", "tracks.csv", "fates.csv", "snapshots/"));
         for (String picture : List.of(RunPlots.DISTANCES, RunPlots.ENERGY, RunPlots.HUBBLE)) {
             if (java.nio.file.Files.isRegularFile(dir.resolve(picture))) {
                 files.add(picture);

@@ -12,9 +12,6 @@ import org.holdfast.run.RunEvent;
  */
 public final class FateReport {
 
-    /** The member a dissolved group ends with: the tracker's "main group", one body, nothing bound to it. */
-    static final String LEFT_ALONE = "is what is left of the group, alone: no other member stays bound to it";
-
     private FateReport() {
     }
 
@@ -48,7 +45,7 @@ public final class FateReport {
         }
         StringBuilder sb = new StringBuilder();
         for (MemberFate f : fates) {
-            String what = f.fate() == MemberFate.Fate.BOUND && verdict == Verdict.DISSOLVED ? LEFT_ALONE : sentence(f);
+            String what = sentence(f);
             sb.append(String.format(Locale.ROOT, "  %-" + width + "s  %s%n", f.name(), what));
         }
         return sb.toString();
@@ -59,10 +56,16 @@ public final class FateReport {
         return switch (f.fate()) {
             case BOUND -> "stays bound to the group";
             case MERGED -> "merges into " + f.with() + " " + when(f.atGyr());
-            case ESCAPED -> when(f.atGyr()).equals("now") ? "is not bound to the group: it is already leaving"
-                    : "escapes the group " + when(f.atGyr());
-            case RIPPED -> "is torn away by dark energy " + when(f.atGyr());
+            case ESCAPED -> "escapes the group " + when(f.atGyr()) + leaving(f);
+            case RIPPED -> "is torn away by dark energy " + when(f.atGyr()) + leaving(f);
+            case UNBOUND -> "is not bound to the group from the start";
+            case RETURNING -> "has left the group but is falling back when the run ends: its fate is not settled";
         };
+    }
+
+    /** ", gone past the zero-gravity radius in ..." when the leaving time is known. */
+    private static String leaving(MemberFate f) {
+        return Double.isNaN(f.leftGyr()) ? "" : " (beyond the zero-gravity radius " + when(f.leftGyr()) + ")";
     }
 
     /** The verdict in words. */
@@ -72,6 +75,7 @@ public final class FateReport {
             case PARTLY_BOUND -> "Part of the group holds together; the members listed above as leaving do not.";
             case DISSOLVED -> "The group comes apart"
                     + (Double.isNaN(boundUntilGyr) ? "." : ": its last bound pair separates " + when(boundUntilGyr) + ".");
+            case UNBOUND -> "The group is not bound: no member is bound to the heaviest one, even at the start.";
         };
     }
 
@@ -83,11 +87,12 @@ public final class FateReport {
         StringBuilder sb = new StringBuilder();
         for (RunEvent e : events) {
             String who = e.members().isEmpty() ? "" : e.members().get(0);
-            String what = switch (e.kind()) {
-                case "merged" -> String.join(" and ", e.members()) + " merge";
-                case "escaped" -> who + (when(e.tGyr()).equals("now") ? " is already leaving the group" : " escapes");
-                case "ripped" -> who + " is torn away by dark energy";
-                default -> e.kind() + ": " + String.join(", ", e.members());
+            String what = switch (e.type()) {
+                case MERGED -> String.join(" and ", e.members()) + " merge";
+                case ESCAPED -> who + " escapes";
+                case RIPPED -> who + " is torn away by dark energy";
+                case UNBOUND -> who + " is not bound to the group from the start";
+                case DISSOLVED -> "the group comes apart: " + String.join(" and ", e.members()) + " separate";
             };
             sb.append(String.format(Locale.ROOT, "  %-26s %s%n", when(e.tGyr()), what));
         }

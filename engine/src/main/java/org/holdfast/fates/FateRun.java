@@ -67,7 +67,8 @@ public final class FateRun {
 
     /** The fate tracker of a scenario's run. */
     public static FateTracker tracker(Scenario s) {
-        return new FateTracker(s.expansion(), s.run().darkEnergyForce(), analysisIntervalGyr(s.run()));
+        return new FateTracker(s.expansion(), s.run().darkEnergyForce(), s.run().backgroundMatter(),
+                analysisIntervalGyr(s.run()));
     }
 
     /**
@@ -79,6 +80,7 @@ public final class FateRun {
         all.add(fates);
         all.addAll(observers);
         RunResult r = sim.run(all);
-        return new Outcome(r, fates.fates(sim), fates.verdict(), fates.boundUntilGyr(), fates.events(sim), sim);
+        List<MemberFate> members = fates.fates(sim);
+        return new Outcome(r, members, fates.verdict(), fates.boundUntilGyr(), fates.events(sim), sim);
     }
 }

@@ -34,6 +34,22 @@ public final class Subgroups {
      * @param k dark-energy coefficient, 1/Gyr^2
      */
     public static Subgroups find(int n, double[] mass, double[][] x, double[][] v, double k) {
+        return find(n, mass, x, v, k, null);
+    }
+
+    /** The interaction energy of two bodies at a distance per unit mass product. */
+    public interface PairEnergy {
+        double at(int i, int j, double dKpc);
+    }
+
+    /**
+     * Finds the subgroups, judging two single bodies by their own interaction energy (their
+     * pair kernel: overlapping halos are less bound than points) and joined subgroups as points
+     * at their centres of mass.
+     *
+     * @param pairEnergy the bodies' interaction per unit mass product; null for point masses
+     */
+    public static Subgroups find(int n, double[] mass, double[][] x, double[][] v, double k, PairEnergy pairEnergy) {
         List<int[]> members = new ArrayList<>();
         List<double[]> state = new ArrayList<>(); // m, x, y, z, vx, vy, vz
         for (int i = 0; i < n; i++) {
@@ -55,7 +71,14 @@ public final class Subgroups {
                         dx[c] = sb[1 + c] - sa[1 + c];
                         dv[c] = sb[4 + c] - sa[4 + c];
                     }
-                    Binding.Result r = Binding.test(sa[0] + sb[0], k, dx, dv);
+                    Binding.Result r;
+                    if (pairEnergy != null && members.get(a).length == 1 && members.get(b).length == 1) {
+                        double d = Math.sqrt(dx[0] * dx[0] + dx[1] * dx[1] + dx[2] * dx[2]);
+                        double phi = (sa[0] + sb[0]) * pairEnergy.at(members.get(a)[0], members.get(b)[0], d);
+                        r = Binding.test(sa[0] + sb[0], k, dx, dv, phi);
+                    } else {
+                        r = Binding.test(sa[0] + sb[0], k, dx, dv);
+                    }
                     if (r.bound() && (bestA < 0 || r.depth() > bestDepth)) {
                         bestA = a;
                         bestB = b;

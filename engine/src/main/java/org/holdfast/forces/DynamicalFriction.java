@@ -15,10 +15,14 @@ import org.holdfast.units.Units;
  *   dv/dt = -(4 pi G^2 M rho ln Lambda / v^3) [erf X - (2X / sqrt(pi)) exp(-X^2)] v,
  *   X = v / (sqrt(2) sigma),
  * </pre>
- * on every body i inside the halo of a body j at least as heavy, with v its velocity relative
- * to j, rho and sigma those of j's halo at i's place (isotropic Jeans dispersion,
- * {@link JeansDispersion}) and M the mass of i. Host j takes the equal and opposite reaction,
- * so total momentum and the centre of mass are kept. Equal masses brake each other.
+ * once for every pair: the lighter body i (the satellite; on a tie, the one listed later) inside
+ * the halo of the heavier j (the host), with v its velocity relative to j, rho and sigma those of
+ * j's halo at i's place (isotropic Jeans dispersion, {@link JeansDispersion}) and M the bound
+ * mass of i. Host j takes the equal and opposite reaction, so total momentum and the centre of
+ * mass are kept. Counting each pair once keeps the drag continuous in the mass ratio q: at
+ * q = 1 either choice of satellite gives the same force for identical halos, where braking both
+ * ways would double it (and jump at q = 1). The Coulomb logarithm is
+ * mass-ratio aware by default ({@link CoulombLog#DEFAULT}).
  *
  * <p>The work the drag does is handed to the energy budget by {@link #work}, counted in each
  * kick, so the budget E = K + W + ... - work stays constant to integration error.
@@ -82,11 +86,11 @@ public final class DynamicalFriction {
         java.util.Arrays.fill(fy, 0, n, 0);
         java.util.Arrays.fill(fz, 0, n, 0);
         double shortest = Double.POSITIVE_INFINITY;
-        for (int i = 0; i < n; i++) {
-            for (int j = 0; j < n; j++) {
-                if (j == i || b.mass[i] > b.mass[j]) {
-                    continue;
-                }
+        for (int p = 0; p < n; p++) {
+            for (int q = p + 1; q < n; q++) {
+                // one satellite per pair: the lighter, or the later on a tie
+                int i = b.mass[p] < b.mass[q] ? p : q;
+                int j = i == p ? q : p;
                 double rate = dragRate(b, i, j);
                 if (rate > 0) {
                     double dvx = b.vx[i] - b.vx[j];
@@ -125,7 +129,7 @@ public final class DynamicalFriction {
         if (!(rho > 0)) {
             return 0;
         }
-        double lnLambda = logOf[i].at(r, b.halo[i].lengthKpc());
+        double lnLambda = logOf[i].at(r, b.halo[i].lengthKpc(), b.mass[j], b.mass[i]);
         if (!(lnLambda > 0)) {
             return 0;
         }

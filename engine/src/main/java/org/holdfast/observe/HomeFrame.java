@@ -64,8 +64,9 @@ public final class HomeFrame {
 
     /**
      * An observed member as a home-frame state. Without proper motions the member's velocity
-     * relative to the home centre is taken to lie along the line of sight: its size is the
-     * heliocentric v_los plus the observer's own motion along that line.
+     * relative to the home centre is the line-of-sight part (the heliocentric v_los plus the
+     * observer's own motion along that line) plus the assumed transverse part of the member
+     * ({@link ObservedMember#assumedRaKms}, zero in a central run).
      */
     public MemberState toHome(ObservedMember m) {
         Vector3d uIcrs = GalacticRotation.unitVector(m.raDeg(), m.decDeg(), new Vector3d());
@@ -80,6 +81,11 @@ public final class HomeFrame {
         } else {
             double along = m.vLosKms() + u.x * observer.uKms() + u.y * observer.vKms() + u.z * observer.wKms();
             v = new Vector3d(u).mul(along);
+            if (m.assumedRaKms() != 0 || m.assumedDecKms() != 0) {
+                Vector3d[] basis = skyBasis(m.raDeg(), m.decDeg());
+                v.add(skyToHome.transform(new Vector3d(basis[1]).mul(m.assumedRaKms())
+                        .fma(m.assumedDecKms(), basis[2]), new Vector3d()));
+            }
         }
         return new MemberState(toArray(r), toArray(v), m.warnings());
     }

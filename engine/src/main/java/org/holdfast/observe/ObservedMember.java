@@ -14,12 +14,22 @@ import java.util.List;
  * @param pmRaMasYr proper motion mu_alpha* = mu_alpha cos(delta), mas/yr; NaN when not measured
  * @param pmDecMasYr proper motion mu_delta, mas/yr; NaN when not measured
  * @param warnings what the reader assumed, one line each, for the caller to show
+ * @param assumedRaKms without proper motions: the transverse velocity assumed toward increasing
+ *     RA, relative to the home galaxy's centre, km/s (0 in a central run, a draw in a sampled one)
+ * @param assumedDecKms the same toward increasing Dec
  */
 public record ObservedMember(String path, double raDeg, double decDeg, double distanceKpc,
-        double vLosKms, double pmRaMasYr, double pmDecMasYr, List<String> warnings) {
+        double vLosKms, double pmRaMasYr, double pmDecMasYr, List<String> warnings, double assumedRaKms,
+        double assumedDecKms) {
 
     public ObservedMember {
         warnings = List.copyOf(warnings);
+    }
+
+    /** A member with no assumed transverse velocity. */
+    public ObservedMember(String path, double raDeg, double decDeg, double distanceKpc,
+            double vLosKms, double pmRaMasYr, double pmDecMasYr, List<String> warnings) {
+        this(path, raDeg, decDeg, distanceKpc, vLosKms, pmRaMasYr, pmDecMasYr, warnings, 0, 0);
     }
 
     /** Whether both proper motions were given. */

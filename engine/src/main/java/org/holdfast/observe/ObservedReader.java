@@ -45,6 +45,14 @@ public final class ObservedReader {
      *     doubled or out-of-range value
      */
     public static ObservedMember read(Node observed) {
+        return read(observed, new UnmeasuredMotion(UnmeasuredMotion.NONE, 0));
+    }
+
+    /**
+     * As {@link #read(Node)}, filling an unmeasured transverse velocity in draws as
+     * {@code unmeasured} says (zero in a central run).
+     */
+    public static ObservedMember read(Node observed, UnmeasuredMotion unmeasured) {
         observed.allowOnly(RA, DEC, L, B, DISTANCE, MODULUS, V_LOS, PM_RA, PM_DEC);
         double[] radec = skyPosition(observed);
         double d = distance(observed);
@@ -58,9 +66,17 @@ public final class ObservedReader {
             pmDec = observed.number(PM_DEC);
         } else {
             warnings.add(observed.where(null) + ": " + observed.path() + ": no proper motion given;"
-                    + " assumed no motion across the line of sight relative to the home galaxy's centre");
+                    + " assumed no motion across the line of sight relative to the home galaxy's centre"
+                    + (unmeasured.draws() ? " (in --sample draws: each transverse component drawn from a normal of"
+                            + " sigma " + String.format(java.util.Locale.ROOT, "%.4g", unmeasured.sigmaKms()) + " km/s, [observer] unmeasured_transverse)" : ""));
         }
-        return new ObservedMember(observed.path(), radec[0], radec[1], d, vLos, pmRa, pmDec, warnings);
+        double tRa = 0;
+        double tDec = 0;
+        if (!Double.isFinite(pmRa) && unmeasured.draws()) {
+            tRa = observed.assumedNormal(UnmeasuredMotion.KEY, 0, 0, unmeasured.sigmaKms());
+            tDec = observed.assumedNormal(UnmeasuredMotion.KEY, 1, 0, unmeasured.sigmaKms());
+        }
+        return new ObservedMember(observed.path(), radec[0], radec[1], d, vLos, pmRa, pmDec, warnings, tRa, tDec);
     }
 
     private static double[] skyPosition(Node n) {

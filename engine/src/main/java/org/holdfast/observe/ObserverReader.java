@@ -20,6 +20,8 @@ public final class ObserverReader {
     public static final String DISTANCE = "distance_to_centre_kpc";
     public static final String HEIGHT = "height_kpc";
     public static final String VELOCITY = "velocity_kms";
+    public static final String UNMEASURED = "unmeasured_transverse";
+    public static final String SIGMA = "transverse_sigma_kms";
 
     private ObserverReader() {
     }
@@ -42,12 +44,30 @@ public final class ObserverReader {
     }
 
     /**
+     * How draws fill in unmeasured transverse velocities ({@link UnmeasuredMotion}), from the
+     * {@code [observer]} table: {@code unmeasured_transverse} ("isotropic", the default, or
+     * "none") and {@code transverse_sigma_kms} (default 100).
+     */
+    public static UnmeasuredMotion unmeasured(Node observer) {
+        if (observer == null) {
+            return UnmeasuredMotion.DEFAULT;
+        }
+        String mode = observer.has(UNMEASURED) ? observer.choice(UNMEASURED, UnmeasuredMotion.MODES)
+                : UnmeasuredMotion.ISOTROPIC;
+        double sigma = observer.has(SIGMA) ? observer.positive(SIGMA) : UnmeasuredMotion.DEFAULT_SIGMA_KMS;
+        if (Double.isInfinite(sigma)) {
+            throw observer.error(SIGMA, "must be finite");
+        }
+        return new UnmeasuredMotion(mode, sigma);
+    }
+
+    /**
      * @param observer the {@code [observer]} table
      * @throws org.holdfast.scenario.ScenarioException naming file, line and key for an
      *     unknown key, a missing home galaxy, R0 <= 0, or |height| >= R0
      */
     public static Observer read(Node observer) {
-        observer.allowOnly(GALAXY, DISTANCE, HEIGHT, VELOCITY);
+        observer.allowOnly(GALAXY, DISTANCE, HEIGHT, VELOCITY, UNMEASURED, SIGMA);
         String home = observer.string(GALAXY);
         if (home.isBlank()) {
             throw observer.error(GALAXY, "must name the member the observer lives in");

@@ -95,7 +95,7 @@ public final class RunPlots {
             int row = i % 4;
             double y = log ? max * Math.pow(0.75, row) : max * (0.97 - 0.05 * row);
             c.addAnnotation(new AnnotationText(Integer.toString(i + 1), ev.tGyr(), y, false));
-            notes.add(String.format(java.util.Locale.ROOT, "%d   t = %.1f Gyr   %s: %s", i + 1, ev.tGyr(), ev.kind(),
+            notes.add(String.format(java.util.Locale.ROOT, "%d   t = %.1f Gyr   %s: %s", i + 1, ev.tGyr(), ev.type().key(),
                     String.join(", ", ev.members())));
         }
         Charts.savePng(c, notes, file);

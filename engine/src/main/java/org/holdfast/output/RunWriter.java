@@ -74,12 +74,15 @@ public final class RunWriter {
         observers.add(new SnapshotWriter(folder.dir(), scenario.name(), version));
         TrackWriter tracks = new TrackWriter(folder.dir());
         observers.add(tracks);
+        FateWriter why = new FateWriter(folder.dir(), fates);
+        observers.add(why);
         observers.addAll(watchers);
         FateRun.Outcome r;
         try {
             r = FateRun.run(scenario, sim, fates, observers);
         } finally {
             tracks.close();
+            why.close();
         }
         folder.writeJson(RunFolder.SUMMARY, summary(scenario, version, r, limit));
         if (!jvmShuttingDown()) {
@@ -149,13 +152,15 @@ public final class RunWriter {
             e.put("name", f.name());
             e.put("fate", f.fate().key());
             e.put("at_gyr", Provenance.finiteOrNull(f.atGyr()));
+            e.put("left_gyr", Provenance.finiteOrNull(f.leftGyr()));
             e.put("with", f.with());
+            e.put("stripped_msun", v.strippedMassMsun(f.name()));
             members.add(e);
         }
         m.put("members", members);
         List<Map<String, Object>> events = new ArrayList<>();
         for (RunEvent ev : r.events()) {
-            events.add(Map.of("t_gyr", ev.tGyr(), "kind", ev.kind(), "members", ev.members()));
+            events.add(Map.of("t_gyr", ev.tGyr(), "kind", ev.type().key(), "members", ev.members()));
         }
         m.put("events", events);
         List<Map<String, Object>> finals = new ArrayList<>();

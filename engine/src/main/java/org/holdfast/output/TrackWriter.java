@@ -17,7 +17,8 @@ import org.holdfast.units.Units;
 /**
  * Writes {@code tracks.csv}: one row per galaxy per snapshot, flushed after every snapshot so
  * a killed run keeps what it had. Columns:
- * {@code t_gyr,a,name,x_kpc,y_kpc,z_kpc,vx_kms,vy_kms,vz_kms,mass_msun}.
+ * {@code t_gyr,a,name,x_kpc,y_kpc,z_kpc,vx_kms,vy_kms,vz_kms,mass_msun,stripped_msun}: mass_msun is
+ * the bound mass (after tidal stripping and mergers), stripped_msun what stripping took so far.
  */
 public final class TrackWriter implements RunObserver, AutoCloseable {
 
@@ -26,7 +27,7 @@ public final class TrackWriter implements RunObserver, AutoCloseable {
 
     /** The header, in order. */
     public static final String[] COLUMNS = {
-        "t_gyr", "a", "name", "x_kpc", "y_kpc", "z_kpc", "vx_kms", "vy_kms", "vz_kms", "mass_msun"
+        "t_gyr", "a", "name", "x_kpc", "y_kpc", "z_kpc", "vx_kms", "vy_kms", "vz_kms", "mass_msun", "stripped_msun"
     };
 
     private final Path file;
@@ -53,7 +54,8 @@ public final class TrackWriter implements RunObserver, AutoCloseable {
             for (int i = 0; i < run.bodyCount(); i++) {
                 csv.printRecord(run.tGyr(), run.scaleFactor(), run.bodyName(i),
                         run.bodyX()[i], run.bodyY()[i], run.bodyZ()[i],
-                        run.bodyVx()[i] * k, run.bodyVy()[i] * k, run.bodyVz()[i] * k, run.bodyMass()[i]);
+                        run.bodyVx()[i] * k, run.bodyVy()[i] * k, run.bodyVz()[i] * k, run.bodyMass()[i],
+                        run.strippedMassMsun(run.bodyName(i)));
             }
             csv.flush();
         } catch (IOException e) {

@@ -43,6 +43,8 @@ final class GroupSystem implements TrialSystem {
     private final double[] savedDrag;
     private double savedFrictionWork;
     private double mergerEnergy;
+    /** Energy budget change booked by tidal stripping (run.Stripping). */
+    private double strippedEnergy;
 
     GroupSystem(Bodies bodies, Tracers tracers, PairGravity gravity, BackgroundTide tide, TracerField field,
             DynamicalFriction friction, double startGyr) {
@@ -217,6 +219,7 @@ final class GroupSystem implements TrialSystem {
         e.add(-work.value());
         e.add(-frictionWork.value());
         e.add(mergerEnergy);
+        e.add(strippedEnergy);
         return e.value();
     }
 
@@ -228,6 +231,11 @@ final class GroupSystem implements TrialSystem {
     /** Orbital energy mergers have taken out of the pair sum so far, Msun kpc^2/Gyr^2. */
     double mergerEnergy() {
         return mergerEnergy;
+    }
+
+    /** Books the energy change of moving stripped mass to its host: the budget before minus after. */
+    void addStrippedEnergy(double removed) {
+        strippedEnergy += removed;
     }
 
     /** Books the orbital energy a merger removed: the budget before minus after. */

@@ -14,7 +14,8 @@ import org.holdfast.halos.Halos;
 
 /**
  * Merges members that come closer than a merge distance while bound to each other
- * ({@link Binding}, point masses in the dark-energy field of the moment). The heavier one
+ * ({@link Binding} with the pair's own interaction energy from its kernel, in the run's
+ * background field of the moment: dark energy, and the mean matter density when included). The heavier one
  * survives (the earlier on a tie) and carries on as one body: both masses, the pair's centre of
  * mass and momentum (so total momentum is kept exactly up to round-off), and the halo
  * {@link Halos#remnant}. The absorbed member's stars are handed to the survivor, and the
@@ -73,7 +74,8 @@ final class Mergers {
 
     private int[] closeBoundPair(GroupSystem s) {
         Bodies b = s.bodies;
-        double k = darkEnergy ? history.darkEnergyAcceleration(s.time()) : 0;
+        // the run's own background field: dark energy, and the mean matter density when included
+        double k = s.tide.active() ? s.tide.coefficient(s.time()) : 0;
         double[] dx = new double[3];
         double[] dv = new double[3];
         for (int i = 0; i < b.count(); i++) {
@@ -88,7 +90,11 @@ final class Mergers {
                 dv[0] = b.vx[j] - b.vx[i];
                 dv[1] = b.vy[j] - b.vy[i];
                 dv[2] = b.vz[j] - b.vz[i];
-                if (Binding.test(b.mass[i] + b.mass[j], k, dx, dv).bound()) {
+                // the pair's own interaction energy W = m_i m_j w(d), per reduced mass M w(d):
+                // overlapping halos are far less bound than points at the same distance
+                double m = b.mass[i] + b.mass[j];
+                double phi = m * s.gravity.kernels().kernel(b.shape[i], b.shape[j]).energy(d);
+                if (Binding.test(m, k, dx, dv, phi).bound()) {
                     return new int[] {i, j};
                 }
             }
@@ -125,7 +131,7 @@ final class Mergers {
         }
         s.updateAccelerations();
         s.addMergerEnergy(before - s.energyBudget());
-        events.add(new RunEvent(s.time(), "merged", List.of(survivor, absorbed)));
+        events.add(new RunEvent(s.time(), RunEvent.Kind.MERGED, List.of(survivor, absorbed)));
     }
 
     /** Stars of the absorbed body now belong to the survivor; hosts above it move down one. */

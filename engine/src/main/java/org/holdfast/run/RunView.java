@@ -74,6 +74,20 @@ public interface RunView {
     /** The initial centre-of-mass velocity in the user's frame (kpc/Gyr). */
     double[] frameVelocity();
 
+    /**
+     * The interaction energy of bodies i and j at distance d per unit product of their masses
+     * (kpc^2 Gyr^-2 Msun^-1): their pair kernel, so overlapping halos are judged by their own
+     * interaction; point masses, -G / d, by default.
+     */
+    default double pairEnergy(int i, int j, double dKpc) {
+        return -org.holdfast.units.Units.G / dKpc;
+    }
+
+    /** Mass tidal stripping has taken from a member so far, Msun (0 for none, or an unknown name). */
+    default double strippedMassMsun(String name) {
+        return 0;
+    }
+
     /** Events recorded by the simulation itself so far (mergers), in time order. */
     default java.util.List<RunEvent> events() {
         return java.util.List.of();

@@ -49,6 +49,8 @@ public final class Simulation implements RunView, AutoCloseable {
     private final double[] frameVelocity;
     /** Null when members do not merge (a backward run, or merge_within_kpc = 0). */
     private final Mergers mergers;
+    /** Tidal stripping of satellites; null without dynamical friction (they come together). */
+    private final Stripping stripping;
     private long steps;
     private double energy0;
     private double energyScale;
@@ -67,6 +69,7 @@ public final class Simulation implements RunView, AutoCloseable {
         this.frameVelocity = velocity;
         this.mergers = settings.mergers()
                 ? new Mergers(settings.mergeWithinKpc(), history, settings.darkEnergyForce()) : null;
+        this.stripping = settings.dynamicalFriction() ? new Stripping() : null;
     }
 
     /** A simulation using every core for the tracers. */
@@ -168,6 +171,10 @@ public final class Simulation implements RunView, AutoCloseable {
                 break;
             }
             if (mergers != null && mergers.check(system)) {
+                updateEnergy();
+            }
+            // tidal stripping of satellites (run.Stripping), between steps like mergers
+            if (stripping != null && stripping.apply(system, mergers)) {
                 updateEnergy();
             }
             if (system.bodies.count() <= 64) {
@@ -537,6 +544,17 @@ public final class Simulation implements RunView, AutoCloseable {
     /** Work dynamical friction has done so far (negative), Msun kpc^2/Gyr^2; 0 without friction. */
     public double frictionWork() {
         return system.frictionWork();
+    }
+
+    @Override
+    public double pairEnergy(int i, int j, double dKpc) {
+        org.holdfast.forces.Bodies b = system.bodies;
+        return system.gravity.kernels().kernel(b.shape[i], b.shape[j]).energy(dKpc);
+    }
+
+    @Override
+    public double strippedMassMsun(String name) {
+        return stripping == null ? 0 : stripping.strippedByName().getOrDefault(name, 0.0);
     }
 
     /** Orbital energy taken out of the pair sum by mergers so far, Msun kpc^2/Gyr^2. */

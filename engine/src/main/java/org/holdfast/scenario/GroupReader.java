@@ -62,12 +62,14 @@ public final class GroupReader {
         double[] homeVel = home == null ? null
                 : home.has("velocity_kms") ? home.vector("velocity_kms", 3) : new double[3];
         HomeFrame frame = observer == null ? null : new HomeFrame(observer);
+        org.holdfast.observe.UnmeasuredMotion unmeasured = observer == null ? null
+                : org.holdfast.observe.ObserverReader.unmeasured(root.table("observer"));
         List<GalaxySpec> galaxies = new ArrayList<>();
         Map<String, Node> byName = new HashMap<>();
         for (Node g : nodes) {
             GalaxySpec spec;
             if (g.hasInFile("observed")) {
-                MemberState s = frame.toHome(ObservedReader.read(g.requireTable("observed")));
+                MemberState s = frame.toHome(ObservedReader.read(g.requireTable("observed"), unmeasured));
                 warnings.addAll(s.warnings());
                 spec = galaxy(g, add(homePos, s.positionKpc()), add(homeVel, s.velocityKms()));
             } else {

@@ -115,6 +115,15 @@ public final class Node {
         return finite(key, mustBePositive ? numbers.readPositive(this, key, raw) : numbers.read(this, key, raw));
     }
 
+    /**
+     * Component {@code index} of an assumed number that is not in the file: the mean in a
+     * central run, a draw from normal(mean, sigma) at path {@code key.index} in a sampling run
+     * ({@link NumberReader#assumeNormal}).
+     */
+    public double assumedNormal(String key, int index, double mean, double sigma) {
+        return numbers.assumeNormal(this, key, index, mean, sigma);
+    }
+
     /** An optional number. */
     public double number(String key, double fallback) {
         return has(key) ? number(key) : fallback;

@@ -35,6 +35,17 @@ public interface NumberReader {
         return read(node, key, raw);
     }
 
+    /**
+     * A number the scenario does not give but the reader assumes: component {@code index} of
+     * {@code key} (an unmeasured quantity, such as the transverse velocity of a member with no
+     * proper motion), normally distributed with this mean and sigma. A reader of central values
+     * returns the mean and records nothing, so a central run is as if the number were the mean;
+     * a drawing reader draws it as it would an uncertain key at that path, and records it.
+     */
+    default double assumeNormal(Node node, String key, int index, double mean, double sigma) {
+        return mean;
+    }
+
     /** The plain reader: integers and floats only. */
     NumberReader PLAIN = (node, key, raw) -> {
         if (raw instanceof Double d) {

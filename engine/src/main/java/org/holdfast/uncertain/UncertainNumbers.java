@@ -79,6 +79,22 @@ public final class UncertainNumbers implements NumberReader {
         return value(node, key, node.keyPath(key) + "." + index, key + " component " + index, raw, false);
     }
 
+    @Override
+    public double assumeNormal(Node node, String key, int index, double mean, double sigma) {
+        if (!sampling || !(sigma > 0)) {
+            return mean;
+        }
+        String path = node.keyPath(key) + "." + index;
+        UncertainValue known = used.get(path);
+        if (known != null) {
+            return known.value();
+        }
+        Distribution d = new Distribution.Normal(mean, sigma);
+        double v = draw(d, path, false);
+        used.put(path, new UncertainValue(path, d, v));
+        return v;
+    }
+
     /** Every uncertain key read so far, in the order first read, with the value used. */
     public List<UncertainValue> used() {
         return Collections.unmodifiableList(new ArrayList<>(used.values()));

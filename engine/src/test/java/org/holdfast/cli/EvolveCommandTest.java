@@ -88,9 +88,27 @@ class EvolveCommandTest {
     }
 
     @Test
+    void fatesSayWhyPerMemberPerSnapshot() throws IOException {
+        List<String> lines = Files.readAllLines(run.resolve("fates.csv"), StandardCharsets.UTF_8);
+        assertEquals("t_gyr,name,in_main_group,separation_kpc,energy_kms2,barrier_kms2,barrier_kpc,zero_gravity_kpc,"
+                + "k_gyr2,mass_msun,stripped_msun", lines.get(0));
+        assertEquals(1 + 5 * 2, lines.size());
+        String[] arn = lines.get(1).split(",", -1);
+        String[] bel = lines.get(2).split(",", -1);
+        // both judged against each other: 300 kpc apart at the start, bound (energy below the barrier top)
+        assertEquals(300.0, Double.parseDouble(arn[3]), 1e-9);
+        assertEquals(300.0, Double.parseDouble(bel[3]), 1e-9);
+        assertTrue(Double.parseDouble(bel[4]) < Double.parseDouble(bel[5]), lines.get(2));
+        JsonNode members = new ObjectMapper().readTree(run.resolve("summary.json").toFile()).get("members");
+        for (JsonNode m : members) {
+            assertTrue(m.has("left_gyr") && m.has("stripped_msun"), m.toString());
+        }
+    }
+
+    @Test
     void tracksHaveOneRowPerGalaxyPerSnapshot() throws IOException {
         List<String> lines = Files.readAllLines(run.resolve("tracks.csv"), StandardCharsets.UTF_8);
-        assertEquals("t_gyr,a,name,x_kpc,y_kpc,z_kpc,vx_kms,vy_kms,vz_kms,mass_msun", lines.get(0));
+        assertEquals("t_gyr,a,name,x_kpc,y_kpc,z_kpc,vx_kms,vy_kms,vz_kms,mass_msun,stripped_msun", lines.get(0));
         // Snapshots at 0, 0.5, 1, 1.5, 2 Gyr: five, two galaxies each.
         assertEquals(1 + 5 * 2, lines.size());
         String[] first = lines.get(1).split(",");

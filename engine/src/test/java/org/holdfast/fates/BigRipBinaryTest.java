@@ -8,7 +8,7 @@ import java.util.List;
 import org.holdfast.expansion.ConstantW;
 import org.holdfast.expansion.Cosmology;
 import org.holdfast.expansion.ExpansionTable;
-import org.holdfast.fates.MemberFate.Fate;
+import org.holdfast.fates.Fate;
 import org.holdfast.group.GalaxySpec;
 import org.holdfast.group.GroupSpec;
 import org.holdfast.group.HaloSpec;
@@ -73,6 +73,13 @@ class BigRipBinaryTest {
         assertTrue(t < caldwell, "ripped at " + t + ", after the estimate of Caldwell et al., " + caldwell);
         assertTrue(t <= minimumGone + periodGyr / 100 && t >= minimumGone - 0.05 * periodGyr,
                 "ripped at " + t + ", expected within 0.05 P before " + minimumGone);
+        // it actually leaves later, when its separation passes the zero-gravity radius (G M / k)^(1/3)
+        // (Chernin et al.), which shrinks to nothing at the rip: between the two and before the rip
+        assertTrue(second.leftGyr() > t && second.leftGyr() < rip, second.toString());
+        // the pair was the group: the other member is not "bound" to it, it is ripped with it
+        assertEquals(Fate.RIPPED, fates.get(0).fate(), fates.get(0).toString());
+        assertEquals(t, fates.get(0).atGyr());
+        assertEquals(FateTracker.Verdict.DISSOLVED, tracker.verdict());
     }
 
     /** The time the dark-energy coefficient k(t) reaches k, by bisection (k grows toward the rip). */

@@ -5,7 +5,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.List;
 
-import org.holdfast.fates.MemberFate.Fate;
+import org.holdfast.fates.Fate;
 import org.holdfast.run.RunEvent;
 import org.junit.jupiter.api.Test;
 
@@ -27,18 +27,19 @@ class FateReportTest {
         String t = FateReport.table(f);
         assertTrue(t.contains("Pim    merges into Orla in 3.2 billion years"), t);
         assertTrue(t.contains("Quist  is torn away by dark energy in 20.1 billion years"), t);
-        String line = FateReport.timeline(List.of(new RunEvent(3.2, "merged", List.of("Orla", "Pim"))));
+        String line = FateReport.timeline(List.of(new RunEvent(3.2, RunEvent.Kind.MERGED, List.of("Orla", "Pim"))));
         assertTrue(line.contains("Orla and Pim merge"), line);
     }
 
     @Test
-    void theMemberLeftWhenTheGroupComesApartIsNotSaidToStayBound() {
-        List<MemberFate> f = List.of(new MemberFate("Orla", Fate.BOUND, Double.NaN, null),
-                new MemberFate("Quist", Fate.RIPPED, 20.1, null));
+    void aRippedMemberShowsBothTimesAndUnboundSaysFromTheStart() {
+        List<MemberFate> f = List.of(new MemberFate("Orla", Fate.RIPPED, 20.1, 20.4, null),
+                new MemberFate("Quist", Fate.RIPPED, 20.1, 20.4, null),
+                new MemberFate("Rusk", Fate.UNBOUND, 0.0, null));
         String apart = FateReport.table(f, FateTracker.Verdict.DISSOLVED);
-        assertTrue(apart.contains("Orla   is what is left of the group, alone: no other member stays bound to it"), apart);
-        assertTrue(!apart.contains("stays bound to the group"), apart);
-        String partly = FateReport.table(f, FateTracker.Verdict.PARTLY_BOUND);
-        assertTrue(partly.contains("Orla   stays bound to the group"), partly);
+        assertTrue(apart.contains("Orla   is torn away by dark energy in 20.1 billion years (beyond the zero-gravity"
+                + " radius in 20.4 billion years)"), apart);
+        assertTrue(apart.contains("Rusk   is not bound to the group from the start"), apart);
+        assertTrue(!apart.contains("stays bound"), apart);
     }
 }

@@ -9,7 +9,7 @@ import java.util.List;
 import org.holdfast.expansion.CosmologicalConstant;
 import org.holdfast.expansion.Cosmology;
 import org.holdfast.expansion.ExpansionTable;
-import org.holdfast.fates.MemberFate.Fate;
+import org.holdfast.fates.Fate;
 import org.holdfast.group.GalaxySpec;
 import org.holdfast.group.GroupSpec;
 import org.holdfast.group.HaloSpec;
@@ -45,7 +45,9 @@ class ZeroGravityRadiusTest {
         }
         Fate inby = fates.get(1).fate();
         assertTrue(inby == Fate.MERGED || inby == Fate.BOUND, "Inby: " + fates.get(1));
-        assertEquals(Fate.ESCAPED, fates.get(2).fate(), "Outby: " + fates.get(2));
+        // Outby is outside the zero-gravity radius from the start: unbound from the start, not "escaped at 0"
+        assertEquals(Fate.UNBOUND, fates.get(2).fate(), "Outby: " + fates.get(2));
+        assertEquals(0.0, fates.get(2).atGyr());
         assertEquals(Fate.BOUND, fates.get(0).fate());
     }
 }

@@ -8,7 +8,7 @@ import java.util.List;
 import org.holdfast.fates.FateRun;
 import org.holdfast.fates.FateTracker.Verdict;
 import org.holdfast.fates.MemberFate;
-import org.holdfast.fates.MemberFate.Fate;
+import org.holdfast.fates.Fate;
 import org.holdfast.uncertain.UncertainNumbers;
 import org.junit.jupiter.api.Test;
 
