@@ -66,7 +66,8 @@ public final class EngineRunFunction implements RunFunction {
         }
         List<MemberFate> fates = new ArrayList<>();
         for (org.holdfast.fates.MemberFate f : r.members()) {
-            fates.add(new MemberFate(f.name(), f.fate().key(), Double.isNaN(f.atGyr()) ? null : f.atGyr(), f.with()));
+            fates.add(new MemberFate(f.name(), f.fate().key(), finite(f.atGyr()), f.with(), finite(f.leftGyr()), null,
+                    null, null));
         }
         GroupAnalysis.Result group = GroupAnalysis.analyse(fates, start, end);
         Map<String, Double> sampled = new TreeMap<>();
@@ -84,5 +85,10 @@ public final class EngineRunFunction implements RunFunction {
     /** The dark-energy coefficient k(t) (1/Gyr^2) the fates use: zero when the run leaves the force out. */
     private static double k(Scenario s, double tGyr) {
         return s.run().darkEnergyForce() ? s.expansion().darkEnergyAcceleration(tGyr) : 0.0;
+    }
+
+    /** A time as written in the tables: null when the run has none. */
+    private static Double finite(double tGyr) {
+        return Double.isNaN(tGyr) ? null : tGyr;
     }
 }

@@ -1,15 +1,19 @@
 package org.holdfast.sweep;
 
 import java.io.Serializable;
+import java.util.Arrays;
 import java.util.List;
 
 import com.fasterxml.jackson.annotation.JsonInclude;
+
+import org.holdfast.fates.Fate;
 
 /**
  * One member's fate in one run.
  *
  * @param name the member's name
- * @param fate bound, merged, escaped, ripped, or unbound (not bound to the group from the start)
+ * @param fate one of {@link Fate}'s keys: bound, merged, escaped, ripped, unbound (not bound to the
+ *     group from the start) or returning (left, but not gone for good when the run ended)
  * @param atGyr when it happened; null for bound
  * @param with the member it merged with; null unless merged
  * @param leftGyr for a ripped member, when it actually left the group (the rip decides earlier
@@ -30,7 +34,7 @@ public record MemberFate(String name, String fate, Double atGyr, String with, Do
     private static final long serialVersionUID = 2L;
 
     /** The fates a member may have. */
-    public static final List<String> FATES = List.of("bound", "merged", "escaped", "ripped", "unbound");
+    public static final List<String> FATES = Arrays.stream(Fate.values()).map(Fate::key).toList();
 
     /** The outcome of a member that is bound, or merged into a galaxy that stays bound. */
     public static final String TOGETHER = "together";
