@@ -4,14 +4,14 @@ import java.util.ArrayList;
 import java.util.List;
 
 import org.holdfast.group.GalaxySpec;
+import org.holdfast.expansion.RipLadder;
 import org.holdfast.group.GroupSpec;
 import org.holdfast.scenario.GroupReader;
 import org.holdfast.scenario.Node;
 
 /**
  * The group on the first rung of the rip ladder: the scenario's own members when it has any
- * (their total mass, and the mass-weighted mean distance of the others from the heaviest, as
- * the radius of one circular orbit), else a typical small group (invented round numbers).
+ * ({@link RipLadder#groupScale}), else a typical small group (invented round numbers).
  */
 record RipGroup(String name, double massMsun, double radiusKpc) {
 
@@ -26,26 +26,15 @@ record RipGroup(String name, double massMsun, double radiusKpc) {
         if (gs.size() < 2) {
             return DEFAULT;
         }
-        GalaxySpec heavy = gs.get(0);
-        double total = 0;
-        for (GalaxySpec s : gs) {
-            total += s.massMsun();
-            if (s.massMsun() > heavy.massMsun()) {
-                heavy = s;
-            }
+        double[] mass = new double[gs.size()];
+        double[][] pos = new double[gs.size()][];
+        for (int i = 0; i < gs.size(); i++) {
+            mass[i] = gs.get(i).massMsun();
+            pos[i] = gs.get(i).positionKpc();
         }
-        double sum = 0;
-        double weight = 0;
-        for (GalaxySpec s : gs) {
-            if (s != heavy) {
-                double dx = s.positionKpc()[0] - heavy.positionKpc()[0];
-                double dy = s.positionKpc()[1] - heavy.positionKpc()[1];
-                double dz = s.positionKpc()[2] - heavy.positionKpc()[2];
-                sum += s.massMsun() * Math.sqrt(dx * dx + dy * dy + dz * dz);
-                weight += s.massMsun();
-            }
-        }
-        double r = sum / weight;
+        double[] mr = RipLadder.groupScale(mass, pos);
+        double total = mr[0];
+        double r = mr[1];
         return r > 0 ? new RipGroup(String.format(java.util.Locale.ROOT, "a group like %s (%.3g Msun, %.0f kpc)",
                 title, total, r), total, r) : DEFAULT;
     }

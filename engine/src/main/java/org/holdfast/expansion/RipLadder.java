@@ -113,6 +113,37 @@ public final class RipLadder {
         return out;
     }
 
+    /**
+     * The mass and radius of a group as one circular orbit: the total mass, and the mass-weighted
+     * mean distance of the other members from the heaviest (for a pair, their separation).
+     *
+     * @param mass members' masses, Msun
+     * @param pos members' positions, kpc, pos[i] = {x, y, z}
+     * @return {M, R}; R is NaN for fewer than two members
+     */
+    public static double[] groupScale(double[] mass, double[][] pos) {
+        int heavy = 0;
+        double total = 0;
+        for (int i = 0; i < mass.length; i++) {
+            total += mass[i];
+            if (mass[i] > mass[heavy]) {
+                heavy = i;
+            }
+        }
+        double sum = 0;
+        double weight = 0;
+        for (int i = 0; i < mass.length; i++) {
+            if (i != heavy) {
+                double dx = pos[i][0] - pos[heavy][0];
+                double dy = pos[i][1] - pos[heavy][1];
+                double dz = pos[i][2] - pos[heavy][2];
+                sum += mass[i] * Math.sqrt(dx * dx + dy * dy + dz * dz);
+                weight += mass[i];
+            }
+        }
+        return new double[] {total, weight > 0 ? sum / weight : Double.NaN};
+    }
+
     /** A circular orbit of radius r about mass m. */
     private Rung orbit(String name, String key, double m, double r) {
         double gm = Units.G * m;

@@ -95,6 +95,12 @@ public final class RenderCommand implements Callable<Integer> {
             description = "Folder for the frames (default NAME-VIEW-frames here), or the PNG of a --still.")
     Path out;
 
+    @Option(names = "--frame-range", paramLabel = "FIRST-LAST",
+            description = "Draw only frames FIRST to LAST (1-based, inclusive) of the film, e.g. 1-300: several "
+                    + "workers, or the nodes of a render farm, may draw parts of one film into one --out folder at "
+                    + "the same time, and the frames are the same bytes as one worker's.")
+    String frameRange;
+
     @Option(names = "--video", paramLabel = "FILE.mp4", description = "Also encode the frames with ffmpeg (H.264, yuv420p).")
     Path video;
 
@@ -165,6 +171,12 @@ public final class RenderCommand implements Callable<Integer> {
         if (still == null && out != null && Files.exists(out) && !Files.isDirectory(out)) {
             throw new ScenarioException("--out", null, out + " is a file, not a folder for frames");
         }
+        if (frameRange != null && still != null) {
+            throw new ScenarioException("--frame-range", null, "a still is one picture; leave out --frame-range or --still");
+        }
+        if (frameRange != null) {
+            range(frameRange, FilmPlan.MAX_FRAMES);
+        }
         if (video != null && !lowerName(video).endsWith(".mp4")) {
             throw new ScenarioException("--video", null, "expected a file name ending in .mp4 (got " + video + ")");
         }
@@ -192,26 +204,28 @@ public final class RenderCommand implements Callable<Integer> {
 
     private int renderFilm(PrintWriter o, RunArchive run, FilmSpec film) throws IOException, InterruptedException {
         Path dir = out != null ? out : Path.of(stem() + "-" + film.view() + "-frames");
+        int n = film.frameCount();
+        int[] span = frameRange == null ? new int[] {1, n} : range(frameRange, n);
         FilmManifest.claim(dir, input, film, camera);
         FrameFiles files = new FrameFiles(dir);
-        int n = film.frameCount();
-        say(o, String.format(Locale.ROOT, "rendering %d frames (%dx%d %s, %d per second, %s to %s Gyr) into %s", n,
+        CueSheet.write(dir, film, run, ladderNotes(film, run));
+        say(o, String.format(Locale.ROOT, "rendering %s (%dx%d %s, %d per second, %s to %s Gyr) into %s",
+                span[0] == 1 && span[1] == n ? n + " frames" : "frames " + span[0] + " to " + span[1] + " of " + n,
                 film.widthPx(), film.heightPx(), film.view(), film.frameRate(), FilmPlan.shown(film.clock().simGyr(0)),
                 FilmPlan.shown(film.clock().simGyr(film.filmSecondOf(n))), dir));
         ReplayScene scene = new ReplayScene(run);
         CameraPose pose = new CameraPose();
         FollowTarget follow = film.follow() == null ? null : new FollowTarget(film.follow(), run.events());
-        FrameProgress progress = new FrameProgress(o, n, FrameProgress.onTerminal(), quiet);
+        int count = span[1] - span[0] + 1;
+        FrameProgress progress = new FrameProgress(o, count, FrameProgress.onTerminal(), quiet);
         try (FrameRenderer r = new FrameRenderer(film.projection(), settings(film, scene)); progress) {
-            for (int i = 1; i <= n; i++) {
+            for (int i = span[0]; i <= span[1]; i++) {
                 if (files.isComplete(i)) {
                     progress.frameDone(false);
                     continue;
                 }
-                double s = film.filmSecondOf(i);
-                double t = Math.max(run.earliestGyr(), Math.min(run.latestGyr(), film.clock().simGyr(s)));
-                SceneFrame frame = scene.at(t);
-                film.camera().poseAt(s, pose);
+                SceneFrame frame = scene.at(frameGyr(film, run, i));
+                film.camera().poseAt(film.cameraSecondOf(i), pose);
                 if (follow != null) {
                     follow.shift(frame, pose);
                 }
@@ -220,8 +234,50 @@ public final class RenderCommand implements Callable<Integer> {
             }
         }
         say(o, String.format(Locale.ROOT, "%d frames drawn, %d already there, in %.1f s", progress.drawn(),
-                n - progress.drawn(), progress.seconds()));
+                count - progress.drawn(), progress.seconds()));
         return video == null ? 0 : encode(dir, film);
+    }
+
+    /** The simulated time frame {@code index} shows: the film clock's, kept inside the run. */
+    static double frameGyr(FilmSpec film, RunArchive run, int index) {
+        double t = film.clock().simGyr(film.filmSecondOf(index));
+        return Math.max(run.earliestGyr(), Math.min(run.latestGyr(), t));
+    }
+
+    /**
+     * FIRST-LAST, 1-based and inclusive, within a film of {@code frames} frames.
+     *
+     * @throws ScenarioException naming --frame-range
+     */
+    static int[] range(String text, int frames) {
+        java.util.regex.Matcher m = java.util.regex.Pattern.compile("\\s*(\\d{1,7})\\s*-\\s*(\\d{1,7})\\s*").matcher(text);
+        if (!m.matches()) {
+            throw new ScenarioException("--frame-range", null, "expected FIRST-LAST, two frame numbers from 1, e.g. "
+                    + "1-300; got '" + text + "'");
+        }
+        int first = Integer.parseInt(m.group(1));
+        int last = Integer.parseInt(m.group(2));
+        if (first < 1 || last < first) {
+            throw new ScenarioException("--frame-range", null, "FIRST must be at least 1 and LAST at least FIRST (got "
+                    + text.trim() + ")");
+        }
+        if (last > frames) {
+            throw new ScenarioException("--frame-range", null, "this film has " + frames + " frames; LAST is "
+                    + last);
+        }
+        return new int[] {first, last};
+    }
+
+    /** The rungs of the rip ladder inside the film, when its [film] table asks for them. */
+    private static List<CueSheet.Note> ladderNotes(FilmSpec film, RunArchive run) {
+        List<CueSheet.Note> out = new ArrayList<>();
+        if (!film.ladder() || run.history() == null) {
+            return out;
+        }
+        for (RipLadderNotes.Note n : RipLadderNotes.of(run)) {
+            out.add(new CueSheet.Note(n.tGyr(), n.text()));
+        }
+        return out;
     }
 
     private int encode(Path dir, FilmSpec film) throws IOException, InterruptedException {

@@ -54,7 +54,9 @@ public final class FrameFiles {
     /** Writes frame {@code index}: to a temporary file, then renamed into place. */
     public Path write(int index, BufferedImage image) {
         Path target = path(index);
-        Path temp = folder.resolve("." + name(index) + ".part");
+        // a temporary name of this worker's own: several workers may draw into one folder
+        Path temp = folder.resolve("." + name(index) + "." + ProcessHandle.current().pid() + "."
+                + Thread.currentThread().getId() + ".part");
         try {
             if (!ImageIO.write(image, "png", temp.toFile())) {
                 throw new IOException("no PNG writer for this image type");

@@ -21,6 +21,8 @@ public final class RenderSettings {
     private Stretch stretch = Stretch.asinh(0.4, 9.0);
     private final EnumSet<Overlay> overlays = EnumSet.allOf(Overlay.class);
     private int threads = Runtime.getRuntime().availableProcessors();
+    private double domeTextPx = Double.NaN;
+    private boolean concentric;
 
     /** Gaussian sigma of a star or flow-tracer splat, in pixels (default 0.5). */
     public RenderSettings splatSigmaPx(double v) {
@@ -92,6 +94,27 @@ public final class RenderSettings {
     public RenderSettings noOverlays() {
         overlays.clear();
         return this;
+    }
+
+    /**
+     * Text on a dome: the height of the clock's first line in pixels (from degrees of the dome),
+     * and whether the dome is concentric (text round the zenith) rather than unidirectional (text
+     * in the front sweet spot, low in the dome master). Unset: sizes follow the frame's height.
+     */
+    public RenderSettings domeText(double firstLinePx, boolean concentricDome) {
+        domeTextPx = checkRange("dome text (px)", firstLinePx, 4, 2000);
+        concentric = concentricDome;
+        return this;
+    }
+
+    /** Height of the clock's first line on a dome in pixels, NaN when it follows the frame's height. */
+    public double domeTextPx() {
+        return domeTextPx;
+    }
+
+    /** Whether dome text is placed for a concentric dome. */
+    public boolean concentric() {
+        return concentric;
     }
 
     /** Threads that draw a frame (default: all cores). */

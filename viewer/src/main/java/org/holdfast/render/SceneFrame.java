@@ -19,6 +19,8 @@ public final class SceneFrame {
 
     private double tGyr;
     private double scaleFactor = 1;
+    /** The big rip of the run's universe, Gyr from today; NaN when there is none. */
+    private double ripGyr = Double.NaN;
 
     private int galaxyCount;
     private String[] names = new String[0];
@@ -143,6 +145,17 @@ public final class SceneFrame {
 
     public double tGyr() {
         return tGyr;
+    }
+
+    /** Sets the big rip the clock counts down to (NaN: none). */
+    public SceneFrame setRip(double ripGyr) {
+        this.ripGyr = ripGyr;
+        return this;
+    }
+
+    /** The big rip of the run's universe, Gyr from today; NaN when there is none. */
+    public double ripGyr() {
+        return ripGyr;
     }
 
     public double scaleFactor() {

@@ -12,8 +12,11 @@ import org.holdfast.units.Units;
 /**
  * Fills a {@link SceneFrame} for any time of a run from its two nearest snapshots. Galaxies and
  * tracers both move along the cubic Hermite interpolant of their saved positions and velocities
- * (exact for motion that is cubic in time between snapshots); the scale factor, shown only as a
- * number, is blended linearly. A galaxy that merges between two snapshots glides from its own
+ * in comoving coordinates, scaled by a(t) (exact for motion that is cubic in time between
+ * snapshots in the comoving frame, and for anything carried by the expansion: near a rip,
+ * where a grows by a large factor between snapshots, nothing overshoots); the scale factor and
+ * the rate H come from the run's expansion history (an older run folder without a recorded
+ * cosmology falls back to plain Hermite curves and a linear blend of the snapshots' a). A galaxy that merges between two snapshots glides from its own
  * last state towards its survivor's next one and disappears at the merger's time. Trails follow
  * the same curves through the saved track samples up to now (from {@code tracks.csv}, see
  * {@link TrailCurves}) and end at the current position.
@@ -65,14 +68,41 @@ public final class ReplayScene {
         int i = run.bracket(tGyr);
         Snapshot s0 = run.snapshot(i);
         Snapshot s1 = run.snapshotCount() > 1 ? run.snapshot(i + 1) : s0;
+        double a = weights(s0, s1, tGyr);
         fillGalaxies(s0, s1, tGyr);
         fillTracers(s0, s1, tGyr);
-        double a = s1 == s0 ? s0.scaleFactor()
-                : s0.scaleFactor() + (s1.scaleFactor() - s0.scaleFactor()) * (tGyr - s0.tGyr()) / (s1.tGyr() - s0.tGyr());
         frame.setClock(tGyr, a);
+        frame.setRip(run.ripGyr());
         showEvents(tGyr);
         return frame;
     }
+
+    /**
+     * Fills {@link #w} for the interval [s0, s1] at t and returns the scale factor at t: from the
+     * run's expansion history when it is known (positions then interpolate in comoving
+     * coordinates), else blended from the snapshots' values (positions then interpolate as they
+     * are, an older run folder).
+     */
+    private double weights(Snapshot s0, Snapshot s1, double t) {
+        org.holdfast.expansion.ExpansionTable h = run.history();
+        boolean known = h != null && t >= h.earliestGyr() && t <= h.latestGyr()
+                && s0.tGyr() >= h.earliestGyr() && s1.tGyr() <= h.latestGyr()
+                && s1.tGyr() >= h.earliestGyr() && s0.tGyr() <= h.latestGyr();
+        if (s1 == s0) {
+            return known ? h.scaleFactor(t) : s0.scaleFactor();
+        }
+        if (known) {
+            double at = h.scaleFactor(t);
+            SnapshotInterpolation.comovingWeights(s0.tGyr(), h.scaleFactor(s0.tGyr()), h.hubbleRate(s0.tGyr()),
+                    s1.tGyr(), h.scaleFactor(s1.tGyr()), h.hubbleRate(s1.tGyr()), t, at, h.hubbleRate(t), w);
+            return at;
+        }
+        SnapshotInterpolation.comovingWeights(s0.tGyr(), 1, 0, s1.tGyr(), 1, 0, t, 1, 0, w);
+        return s0.scaleFactor() + (s1.scaleFactor() - s0.scaleFactor()) * (t - s0.tGyr()) / (s1.tGyr() - s0.tGyr());
+    }
+
+    /** Interpolation weights of the current frame (see {@link SnapshotInterpolation#comovingWeights}). */
+    private final double[] w = new double[8];
 
     /** Sets the events up to t, only when they differ from the last frame's (setEvents copies them). */
     private void showEvents(double tGyr) {
@@ -161,14 +191,14 @@ public final class ReplayScene {
         }
     }
 
-    private static double coordinate(Snapshot s0, int g, Snapshot s1, int j, int axis, double t, double k) {
-        return SnapshotInterpolation.hermite(s0.tGyr(), s0.positionKpc()[axis][g], s0.velocityKms()[axis][g] * k,
-                s1.tGyr(), s1.positionKpc()[axis][j], s1.velocityKms()[axis][j] * k, t);
+    private double coordinate(Snapshot s0, int g, Snapshot s1, int j, int axis, double t, double k) {
+        return w[0] * s0.positionKpc()[axis][g] + w[1] * s0.velocityKms()[axis][g] * k
+                + w[2] * s1.positionKpc()[axis][j] + w[3] * s1.velocityKms()[axis][j] * k;
     }
 
-    private static double rate(Snapshot s0, int g, Snapshot s1, int j, int axis, double t, double k) {
-        return SnapshotInterpolation.hermiteRate(s0.tGyr(), s0.positionKpc()[axis][g], s0.velocityKms()[axis][g] * k,
-                s1.tGyr(), s1.positionKpc()[axis][j], s1.velocityKms()[axis][j] * k, t);
+    private double rate(Snapshot s0, int g, Snapshot s1, int j, int axis, double t, double k) {
+        return w[4] * s0.positionKpc()[axis][g] + w[5] * s0.velocityKms()[axis][g] * k
+                + w[6] * s1.positionKpc()[axis][j] + w[7] * s1.velocityKms()[axis][j] * k;
     }
 
     /** The merger that took {@code name} away between two snapshot times, or null. */
@@ -263,9 +293,9 @@ public final class ReplayScene {
             float[][] v0 = s0.tracerKms();
             float[][] p1 = s1.tracerKpc();
             float[][] v1 = s1.tracerKms();
-            SnapshotInterpolation.hermite(s0.tGyr(), p0[0], v0[0], s1.tGyr(), p1[0], v1[0], t, k, m, tx);
-            SnapshotInterpolation.hermite(s0.tGyr(), p0[1], v0[1], s1.tGyr(), p1[1], v1[1], t, k, m, ty);
-            SnapshotInterpolation.hermite(s0.tGyr(), p0[2], v0[2], s1.tGyr(), p1[2], v1[2], t, k, m, tz);
+            SnapshotInterpolation.combine(w, p0[0], v0[0], p1[0], v1[0], k, m, tx);
+            SnapshotInterpolation.combine(w, p0[1], v0[1], p1[1], v1[1], k, m, ty);
+            SnapshotInterpolation.combine(w, p0[2], v0[2], p1[2], v1[2], k, m, tz);
         }
         frame.setTracers(m, tx, ty, tz, s0.tracerHost());
     }
