@@ -27,7 +27,7 @@ import org.holdfast.units.Units;
  * <p>The atom is held by electromagnetism, not gravity: its row is the usual order-of-magnitude
  * estimate, the same rule applied to the period of the Bohr orbit, and is marked as such.
  *
- * <p>Beyond the end of the expansion table (a millionth of the age before the rip) k is
+ * <p>Beyond the end of the expansion table (a ten-millionth of the age at the rip before it) k is
  * continued as k_end (tau_end / tau)^2, the late-time form of a rip at constant w, where
  * H = 2 / (3 |1 + w| tau) (Caldwell, Kamionkowski &amp; Weinberg 2003, from a ~ tau^(2/(3(1+w))))
  * and k = -(1 + 3w) H^2 / 2 once dark energy dominates.

@@ -10,7 +10,8 @@ import org.holdfast.expansion.ExpansionTable;
  * <p>Toward a big rip or a big crunch at t_f the snapshots close in on it: once the regular
  * spacing would be coarser than {@link #PER_EFOLD} snapshots per e-fold of the time left
  * tau = t_f - t, they are spaced equally in ln tau instead (tau_j = tau_s e^(-j / PER_EFOLD)),
- * down to the run's end, which is within a millionth of the age at the rip of it. A countdown
+ * down to the run's end, which is within a millionth of the rip time of it (the expansion table
+ * ends a ten-millionth of the age at the rip before it). A countdown
  * film, which spends equal film time on equal ratios of tau, then never has more than a few
  * frames between two snapshots: a film of N frames over a countdown of R e-folds has
  * N / (R PER_EFOLD) frames per snapshot interval (under 3 for 20 s at 30 frames/s, under 9 for
