@@ -50,6 +50,12 @@ public record FilmSpec(double lengthS, int frameRate, String view, int widthPx, 
         return n > 1 ? lengthS * (index - 1) / (n - 1) : 0;
     }
 
+    /** The camera track's second at film second {@code filmS} (a still between frames). */
+    public double cameraSecondAt(double filmS) {
+        int n = frameCount();
+        return n > 1 ? filmS * lengthS / ((n - 1) / (double) frameRate) : 0;
+    }
+
     /** Pixels per degree at the centre of this film's frames. */
     public double pxPerDeg() {
         return switch (view) {
@@ -110,7 +116,8 @@ public record FilmSpec(double lengthS, int frameRate, String view, int widthPx, 
             s.trailBrightness(0);
         }
         if ("dome".equals(view)) {
-            s.domeText(look.textDeg() * pxPerDeg(), "concentric".equals(look.placement()));
+            // never below 8 px, however small a preview
+            s.domeText(Math.max(8, Math.min(2000, look.textDeg() * pxPerDeg())), "concentric".equals(look.placement()));
         }
         return s;
     }

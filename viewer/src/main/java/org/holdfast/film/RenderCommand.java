@@ -189,7 +189,7 @@ public final class RenderCommand implements Callable<Integer> {
         ReplayScene scene = new ReplayScene(run);
         try (FrameRenderer r = new FrameRenderer(film.projection(), settings(film, scene))) {
             SceneFrame frame = scene.at(still);
-            CameraPose pose = film.camera().poseAt(filmS, new CameraPose());
+            CameraPose pose = film.camera().poseAt(film.cameraSecondAt(filmS), new CameraPose());
             if (film.follow() != null) {
                 new FollowTarget(film.follow(), run.events()).shift(frame, pose);
             }
@@ -208,7 +208,8 @@ public final class RenderCommand implements Callable<Integer> {
         int[] span = frameRange == null ? new int[] {1, n} : range(frameRange, n);
         FilmManifest.claim(dir, input, film, camera);
         FrameFiles files = new FrameFiles(dir);
-        CueSheet.write(dir, film, run, ladderNotes(film, run));
+        List<CueSheet.Note> notes = ladderNotes(film, run);
+        CueSheet.write(dir, film, run, notes);
         say(o, String.format(Locale.ROOT, "rendering %s (%dx%d %s, %d per second, %s to %s Gyr) into %s",
                 span[0] == 1 && span[1] == n ? n + " frames" : "frames " + span[0] + " to " + span[1] + " of " + n,
                 film.widthPx(), film.heightPx(), film.view(), film.frameRate(), FilmPlan.shown(film.clock().simGyr(0)),
@@ -229,13 +230,39 @@ public final class RenderCommand implements Callable<Integer> {
                 if (follow != null) {
                     follow.shift(frame, pose);
                 }
-                files.write(i, r.render(frame, pose));
+                setNotes(frame, notes);
+                FilmLook look = film.look();
+                if (!look.deep() && !look.overlayLayer()) {
+                    files.write(i, r.render(frame, pose));
+                } else {
+                    BufferedImage picture = look.deep() ? r.renderDeep(frame, pose, !look.overlayLayer())
+                            : r.renderPicture(frame, pose);
+                    if (look.overlayLayer()) {
+                        // the layer first: a frame file present means both are complete
+                        files.writeLayer(i, r.overlayLayer(frame, pose));
+                    }
+                    files.write(i, picture);
+                }
                 progress.frameDone(true);
             }
         }
         say(o, String.format(Locale.ROOT, "%d frames drawn, %d already there, in %.1f s", progress.drawn(),
                 count - progress.drawn(), progress.seconds()));
         return video == null ? 0 : encode(dir, film);
+    }
+
+    /** The rip ladder's rungs passed by the frame's time, as notes under its events. */
+    private static void setNotes(SceneFrame frame, List<CueSheet.Note> notes) {
+        if (notes.isEmpty()) {
+            return;
+        }
+        List<String> passed = new ArrayList<>();
+        for (CueSheet.Note n : notes) {
+            if (n.tGyr() <= frame.tGyr()) {
+                passed.add(n.text());
+            }
+        }
+        frame.setNotes(passed);
     }
 
     /** The simulated time frame {@code index} shows: the film clock's, kept inside the run. */

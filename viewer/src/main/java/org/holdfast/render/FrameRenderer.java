@@ -99,6 +99,52 @@ public final class FrameRenderer implements AutoCloseable {
     }
 
     /**
+     * Renders one frame at 16 bits per channel (a 48-bit RGB PNG when written): light, stretch
+     * and, when {@code withOverlays}, the overlays drawn on it. The image is reused by the next call.
+     */
+    public BufferedImage renderDeep(SceneFrame scene, CameraPose pose, boolean withOverlays) {
+        draw(scene, pose, null);
+        if (deep == null) {
+            java.awt.color.ColorSpace cs = java.awt.color.ColorSpace.getInstance(java.awt.color.ColorSpace.CS_sRGB);
+            java.awt.image.ComponentColorModel cm = new java.awt.image.ComponentColorModel(cs, new int[] {16, 16, 16},
+                    false, false, java.awt.Transparency.OPAQUE, java.awt.image.DataBuffer.TYPE_USHORT);
+            deep = new BufferedImage(cm, cm.createCompatibleWritableRaster(width, height), false, null);
+            deepPixels = ((java.awt.image.DataBufferUShort) deep.getRaster().getDataBuffer()).getData();
+        }
+        settings.stretch().toDeepPixels(light, deepPixels, 0, height);
+        if (withOverlays && overlays.any()) {
+            overlays.paint(deep, scene, galaxyPx, kpcPerPixel(scene, pose));
+        }
+        return deep;
+    }
+
+    /** Renders the picture alone, without the overlays (8 bits per channel). */
+    public BufferedImage renderPicture(SceneFrame scene, CameraPose pose) {
+        draw(scene, pose, settings.stretch());
+        return image;
+    }
+
+    /**
+     * The overlays of the frame drawn last (by {@link #renderPicture} or {@link #renderDeep}) on
+     * a transparent RGBA image of the frame's size, for compositing over the picture in an
+     * editor. The image is reused by the next call.
+     */
+    public BufferedImage overlayLayer(SceneFrame scene, CameraPose pose) {
+        if (layer == null) {
+            layer = new BufferedImage(width, height, BufferedImage.TYPE_INT_ARGB);
+        }
+        java.util.Arrays.fill(((DataBufferInt) layer.getRaster().getDataBuffer()).getData(), 0);
+        if (overlays.any()) {
+            overlays.paint(layer, scene, galaxyPx, kpcPerPixel(scene, pose));
+        }
+        return layer;
+    }
+
+    private BufferedImage deep;
+    private short[] deepPixels;
+    private BufferedImage layer;
+
+    /**
      * Draws the linear light of a frame (tracers, trails, galaxy centres) into {@link #light()},
      * without the stretch; the light is the same as {@link #render} leaves there.
      */

@@ -179,6 +179,12 @@ final class OverlayPainter {
             text(g, line, dome ? (w - fs.stringWidth(line)) / 2 : margin, y, c);
             y += fs.getHeight();
         }
+        List<String> notes = scene.notes();
+        for (int k = Math.max(0, notes.size() - 2); k < notes.size(); k++) {
+            String line = notes.get(k);
+            text(g, line, dome ? (w - fs.stringWidth(line)) / 2 : margin, y, k == notes.size() - 1 ? PAPER : SLATE);
+            y += fs.getHeight();
+        }
     }
 
     private void paintScaleBar(Graphics2D g, double kpcPerPx, int w, int h, int margin) {

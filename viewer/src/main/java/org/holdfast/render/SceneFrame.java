@@ -147,6 +147,19 @@ public final class SceneFrame {
         return tGyr;
     }
 
+    private List<String> notes = List.of();
+
+    /** Sets notes shown under the events (the rip ladder's rungs passed so far); copied. */
+    public SceneFrame setNotes(List<String> text) {
+        this.notes = List.copyOf(text);
+        return this;
+    }
+
+    /** Notes shown under the events, oldest first. */
+    public List<String> notes() {
+        return notes;
+    }
+
     /** Sets the big rip the clock counts down to (NaN: none). */
     public SceneFrame setRip(double ripGyr) {
         this.ripGyr = ripGyr;
