@@ -357,7 +357,8 @@ public final class RunArchive {
     public org.holdfast.expansion.ExpansionTable history() {
         if (!historyRead) {
             history = RunCosmology.read(dir, Math.max(Math.abs(firstGyr()), Math.abs(lastGyr())));
-            historyRead = true;
+            // a run still being written may not have its resolved.json yet: look again later
+            historyRead = history != null || summaryRead;
         }
         return history;
     }
