@@ -25,7 +25,7 @@ public record FilmLook(double textDeg, String placement, double glowDeg, boolean
     static final List<String> PLACEMENTS = List.of("unidirectional", "concentric");
 
     /** Star glow of the look holdfast had at 1920x1080, 50 degrees of field: 0.5 px there. */
-    static final double DEFAULT_GLOW_DEG = 0.5 / (540 / Math.tan(Math.toRadians(25)) * Math.PI / 180);
+    static final double DEFAULT_GLOW_DEG = org.holdfast.render.RenderSettings.DEFAULT_GLOW_DEG;
 
     /** The defaults: what a [film] table with none of these keys gets. */
     static FilmLook standard() {

@@ -61,7 +61,7 @@ public record FilmSpec(double lengthS, int frameRate, String view, int widthPx, 
         return switch (view) {
             case "dome" -> widthPx / domeSpanDeg;
             case "panorama" -> heightPx / 180.0;
-            default -> 0.5 * heightPx / Math.tan(Math.toRadians(25)) * Math.PI / 180;
+            default -> RenderSettings.pxPerDegFlat(heightPx);
         };
     }
 
@@ -109,9 +109,7 @@ public record FilmSpec(double lengthS, int frameRate, String view, int widthPx, 
         for (Overlay o : overlays) {
             s.overlay(o, true);
         }
-        double sigma = look.glowDeg() * pxPerDeg();
-        s.splatSigmaPx(Math.max(0.3, Math.min(8, sigma)));
-        s.galaxySigmaPx(Math.max(0.3, Math.min(8, 3.2 * sigma)));
+        s.angularGlow(look.glowDeg(), pxPerDeg());
         if (!look.trails()) {
             s.trailBrightness(0);
         }

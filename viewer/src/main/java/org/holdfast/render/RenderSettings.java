@@ -117,6 +117,29 @@ public final class RenderSettings {
         return concentric;
     }
 
+    /**
+     * Star glow (Gaussian sigma) in degrees of the look holdfast had at 1920x1080 with 50 degrees
+     * of field: 0.5 px there.
+     */
+    public static final double DEFAULT_GLOW_DEG = 0.5 / pxPerDegFlat(1080);
+
+    /** Pixels per degree at the centre of a flat frame {@code heightPx} high with 50 degrees of field. */
+    public static double pxPerDegFlat(int heightPx) {
+        return 0.5 * heightPx / Math.tan(Math.toRadians(25)) * Math.PI / 180;
+    }
+
+    /**
+     * Glow sizes as angles: a star's sigma {@code glowDeg} and a galaxy centre's 3.2 times it,
+     * at {@code pxPerDeg}, kept within the kernels' range of 0.3 to 8 px; a small preview then
+     * looks like the large master.
+     */
+    public RenderSettings angularGlow(double glowDeg, double pxPerDeg) {
+        double sigma = glowDeg * pxPerDeg;
+        splatSigmaPx(Math.max(0.3, Math.min(8, sigma)));
+        galaxySigmaPx(Math.max(0.3, Math.min(8, 3.2 * sigma)));
+        return this;
+    }
+
     /** Threads that draw a frame (default: all cores). */
     public RenderSettings threads(int v) {
         if (v < 1 || v > 1024) {

@@ -85,21 +85,16 @@ public final class ReplayScene {
      */
     private double weights(Snapshot s0, Snapshot s1, double t) {
         org.holdfast.expansion.ExpansionTable h = run.history();
-        boolean known = h != null && t >= h.earliestGyr() && t <= h.latestGyr()
-                && s0.tGyr() >= h.earliestGyr() && s1.tGyr() <= h.latestGyr()
-                && s1.tGyr() >= h.earliestGyr() && s0.tGyr() <= h.latestGyr();
         if (s1 == s0) {
-            return known ? h.scaleFactor(t) : s0.scaleFactor();
+            return h != null && t >= h.earliestGyr() && t <= h.latestGyr() ? h.scaleFactor(t) : s0.scaleFactor();
         }
-        if (known) {
-            double at = h.scaleFactor(t);
-            SnapshotInterpolation.comovingWeights(s0.tGyr(), h.scaleFactor(s0.tGyr()), h.hubbleRate(s0.tGyr()),
-                    s1.tGyr(), h.scaleFactor(s1.tGyr()), h.hubbleRate(s1.tGyr()), t, at, h.hubbleRate(t), w);
-            return at;
-        }
-        SnapshotInterpolation.comovingWeights(s0.tGyr(), 1, 0, s1.tGyr(), 1, 0, t, 1, 0, w);
-        return s0.scaleFactor() + (s1.scaleFactor() - s0.scaleFactor()) * (t - s0.tGyr()) / (s1.tGyr() - s0.tGyr());
+        double a = TrailCurves.weights(h, s0.tGyr(), s1.tGyr(), t, w);
+        return !Double.isNaN(a) ? a
+                : s0.scaleFactor() + (s1.scaleFactor() - s0.scaleFactor()) * (t - s0.tGyr()) / (s1.tGyr() - s0.tGyr());
     }
+
+    /** Weights of the trail's last piece. */
+    private final double[] pw = new double[8];
 
     /** Interpolation weights of the current frame (see {@link SnapshotInterpolation#comovingWeights}). */
     private final double[] w = new double[8];
@@ -248,7 +243,7 @@ public final class ReplayScene {
             trailZ[g] = new double[room];
         }
         if (m > 0) {
-            double[][] dense = curves.dense(names[g], track);
+            double[][] dense = curves.dense(names[g], track, run.history());
             System.arraycopy(dense[0], 0, trailT[g], 0, prefix);
             System.arraycopy(dense[1], 0, trailX[g], 0, prefix);
             System.arraycopy(dense[2], 0, trailY[g], 0, prefix);
@@ -267,12 +262,22 @@ public final class ReplayScene {
         double c = Units.KMS_TO_KPC_PER_GYR;
         double t0 = track[0][k];
         int p = TrailCurves.PIECES;
+        if (t == t0) {
+            for (int i = 1; i < p; i++) {
+                trailT[g][at + i - 1] = t;
+                trailX[g][at + i - 1] = gx[g];
+                trailY[g][at + i - 1] = gy[g];
+                trailZ[g][at + i - 1] = gz[g];
+            }
+            return;
+        }
         for (int i = 1; i < p; i++) {
             double ti = t0 + (t - t0) * i / p;
+            TrailCurves.weights(run.history(), t0, t, ti, pw);
             trailT[g][at + i - 1] = ti;
-            trailX[g][at + i - 1] = SnapshotInterpolation.hermite(t0, track[1][k], track[4][k] * c, t, gx[g], gvx[g], ti);
-            trailY[g][at + i - 1] = SnapshotInterpolation.hermite(t0, track[2][k], track[5][k] * c, t, gy[g], gvy[g], ti);
-            trailZ[g][at + i - 1] = SnapshotInterpolation.hermite(t0, track[3][k], track[6][k] * c, t, gz[g], gvz[g], ti);
+            trailX[g][at + i - 1] = pw[0] * track[1][k] + pw[1] * track[4][k] * c + pw[2] * gx[g] + pw[3] * gvx[g];
+            trailY[g][at + i - 1] = pw[0] * track[2][k] + pw[1] * track[5][k] * c + pw[2] * gy[g] + pw[3] * gvy[g];
+            trailZ[g][at + i - 1] = pw[0] * track[3][k] + pw[1] * track[6][k] * c + pw[2] * gz[g] + pw[3] * gvz[g];
         }
     }
 
