@@ -42,6 +42,8 @@ import picocli.CommandLine.Spec;
             "20 s, a quarter orbit around the group, a clock over the whole run (a countdown",
             "when the run stopped before a big rip). Options replace the table's keys. Run",
             "the same command again to carry on: finished frames are kept and skipped.",
+            "Beside the frames, cues.csv lists each frame's timecode, time, scale factor,",
+            "clock text and events; --frame-range lets several workers share one folder.",
             "",
             "Examples:",
             "  holdfast evolve scenarios/hollin-group.toml    # writes hollin-group-run/",
@@ -50,7 +52,8 @@ import picocli.CommandLine.Spec;
             "  holdfast render hollin-group-run --projection dome --size 2048 --fps 30 \\",
             "      --seconds 40 --out dome-frames --video hollin-dome.mp4",
             "  holdfast render hollin-group-run --still 4.2 --camera 40,25,350 \\",
-            "      --out poster.png"
+            "      --out poster.png",
+            "  holdfast render hollin-group-run --out frames --frame-range 1-300"
         })
 public final class RenderCommand implements Callable<Integer> {
 
@@ -248,7 +251,18 @@ public final class RenderCommand implements Callable<Integer> {
         }
         say(o, String.format(Locale.ROOT, "%d frames drawn, %d already there, in %.1f s", progress.drawn(),
                 count - progress.drawn(), progress.seconds()));
-        return video == null ? 0 : encode(dir, film);
+        if (video == null) {
+            return 0;
+        }
+        for (int i = 1; i <= n; i++) {
+            if (!files.isComplete(i)) {
+                // a worker of a split film: the others are still drawing
+                say(o, "frame " + i + " is not drawn yet, so no video was made; run this command again with"
+                        + " --video once every --frame-range is done");
+                return 0;
+            }
+        }
+        return encode(dir, film);
     }
 
     /** The rip ladder's rungs passed by the frame's time, as notes under its events. */
