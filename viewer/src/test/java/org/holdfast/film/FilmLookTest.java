@@ -75,6 +75,22 @@ class FilmLookTest {
         assertEquals(1.6, flat.galaxySigmaPx(), 1e-9);
     }
 
+    /** The scale bar's depth is the distance to the point looked at, along keyframes too. */
+    @Test
+    void keyframesCarryTheDistanceToThePointLookedAt() {
+        FilmSpec spec = FilmReaderTest.read(BARE + """
+                [[film.keyframe]]
+                at_s = 0
+                eye_kpc = [0, -300, 0]
+                [[film.keyframe]]
+                at_s = 10
+                eye_kpc = [0, -900, 0]
+                """);
+        assertEquals(300, spec.camera().poseAt(0, new CameraPose()).focusKpc(), 1e-9);
+        assertEquals(900, spec.camera().poseAt(10, new CameraPose()).focusKpc(), 1e-9);
+        assertEquals(600, spec.camera().poseAt(5, new CameraPose()).focusKpc(), 1e-9);
+    }
+
     @Test
     void trailsSwitchOffInShow() {
         FilmSpec spec = FilmReaderTest.read(BARE + "[film.show]\ntrails = false\n");
