@@ -86,7 +86,8 @@ public final class EvolveCommand implements Callable<Integer> {
         RunWriter writer = new RunWriter(s, dirPath, Version.number());
         List<RunObserver> watchers = new ArrayList<>();
         if (!quiet) {
-            watchers.add(new RunProgress(o, RunProgress.onTerminal(), s.run().startGyr(), s.run().untilGyr()));
+            watchers.add(new RunProgress(o, RunProgress.onTerminal(), s.run().startGyr(),
+                    RunProgress.plannedEndGyr(s)));
         }
         // Ctrl+C (or a scheduler's SIGTERM) stops the run at its next step and lets it write its summary
         CountDownLatch written = new CountDownLatch(1);

@@ -16,6 +16,7 @@ import org.holdfast.expansion.CosmologyReader;
 import org.holdfast.expansion.ExpansionPlot;
 import org.holdfast.expansion.ExpansionRangeException;
 import org.holdfast.expansion.ExpansionTable;
+import org.holdfast.expansion.RipLadder;
 import org.holdfast.scenario.Node;
 import org.holdfast.scenario.Overrides;
 import org.holdfast.scenario.ScenarioException;
@@ -39,7 +40,10 @@ import picocli.CommandLine.Spec;
         description = {
             "Solves the expansion of the universe for one cosmology and prints its landmarks (age,",
             "big rip or crunch, Hubble time, dark-energy density, q0, onset of acceleration) and",
-            "a, H and the dark-energy term at a few times.",
+            "a, H and the dark-energy term at a few times. Before a big rip it adds the rip",
+            "ladder: when a group like the scenario's (or a typical one), a galaxy, a solar",
+            "system, a planet and an atom come apart, by holdfast's binding criterion and by",
+            "the rougher rule of Caldwell, Kamionkowski & Weinberg (2003).",
             "",
             "The cosmology comes from the [cosmology] table of a scenario file, or from options.",
             "",
@@ -88,12 +92,14 @@ public final class ExpansionCommand implements Callable<Integer> {
         }
         String title;
         ExpansionTable table;
+        RipGroup group = RipGroup.DEFAULT;
         if (scenario != null) {
             rejectOptionsWithScenario();
             Overrides overrides = Overrides.parse(sets);
             Node root = ScenarioFile.open(scenario, overrides);
             title = root.string("name", scenario.getFileName().toString());
             table = CosmologyReader.solve(root.requireTable("cosmology"), horizonGyr);
+            group = RipGroup.of(root, title);
             overrides.checkAllUsed();
         } else {
             if (!sets.isEmpty()) {
@@ -103,12 +109,13 @@ public final class ExpansionCommand implements Callable<Integer> {
             title = "holdfast expansion";
         }
         List<double[]> samples = samples(table);
+        List<RipLadder.Rung> ladder = RipLadder.of(table, group.name(), group.massMsun(), group.radiusKpc());
         PrintWriter out = spec.commandLine().getOut();
         if (json) {
             out.println(new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT)
-                    .writeValueAsString(ExpansionReport.json(table, samples)));
+                    .writeValueAsString(ExpansionReport.json(table, samples, ladder)));
         } else {
-            ExpansionReport.text(out, title, table, samples);
+            ExpansionReport.text(out, title, table, samples, ladder);
         }
         out.flush();
         if (plot != null) {

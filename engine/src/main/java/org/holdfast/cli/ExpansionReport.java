@@ -8,6 +8,8 @@ import java.util.Map;
 
 import org.holdfast.expansion.Cosmology;
 import org.holdfast.expansion.ExpansionTable;
+import org.holdfast.expansion.RipLadder;
+import org.holdfast.units.TimeWords;
 import org.holdfast.units.Units;
 
 /** The readable table and the JSON object that {@code holdfast expansion} prints. */
@@ -16,7 +18,7 @@ final class ExpansionReport {
     private ExpansionReport() {
     }
 
-    static Map<String, Object> json(ExpansionTable t, List<double[]> samples) {
+    static Map<String, Object> json(ExpansionTable t, List<double[]> samples, List<RipLadder.Rung> ladder) {
         Cosmology c = t.cosmology();
         Map<String, Object> m = ExpansionCommand.map();
         m.put("cosmology", org.holdfast.output.Provenance.cosmology(c, null));
@@ -43,10 +45,58 @@ final class ExpansionReport {
             rows.add(s);
         }
         m.put("samples", rows);
+        m.put("rip_ladder", ladderJson(t, ladder));
         return m;
     }
 
-    static void text(PrintWriter out, String title, ExpansionTable t, List<double[]> samples) {
+    /** The rip ladder as JSON rows; null without a rip. */
+    private static List<Map<String, Object>> ladderJson(ExpansionTable t, List<RipLadder.Rung> ladder) {
+        if (t.ripGyr().isEmpty()) {
+            return null;
+        }
+        double rip = t.ripGyr().getAsDouble();
+        List<Map<String, Object>> rows = new ArrayList<>();
+        for (RipLadder.Rung r : ladder) {
+            Map<String, Object> s = ExpansionCommand.map();
+            s.put("system", r.key());
+            s.put("description", r.system());
+            s.put("mass_msun", Double.isNaN(r.massMsun()) ? null : r.massMsun());
+            s.put("radius_kpc", r.radiusKpc());
+            s.put("period_gyr", r.periodGyr());
+            s.put("holdfast_before_rip_gyr", Double.isNaN(r.holdfastBeforeRipGyr()) ? null : r.holdfastBeforeRipGyr());
+            s.put("holdfast_gyr", Double.isNaN(r.holdfastBeforeRipGyr()) ? null : rip - r.holdfastBeforeRipGyr());
+            s.put("ckw2003_before_rip_gyr", r.ckwBeforeRipGyr());
+            s.put("ckw2003_gyr", rip - r.ckwBeforeRipGyr());
+            s.put("estimate", r.orderOfMagnitude() ? "order of magnitude" : "computed");
+            rows.add(s);
+        }
+        return rows;
+    }
+
+    /** The rip ladder as a table under the landmarks. */
+    private static void ladderText(PrintWriter out, ExpansionTable t, List<RipLadder.Rung> ladder) {
+        if (ladder.isEmpty()) {
+            return;
+        }
+        out.println();
+        out.println("  Rip ladder: how long before the big rip each comes apart");
+        out.printf(Locale.ROOT, "  %-52s %-22s %-22s%n", "system", "holdfast's criterion", "CKW 2003 rule");
+        for (RipLadder.Rung r : ladder) {
+            String hf = Double.isNaN(r.holdfastBeforeRipGyr()) ? "-"
+                    : r.holdfastBeforeRipGyr() >= t.ripGyr().getAsDouble() ? "unbound already"
+                    : TimeWords.span(r.holdfastBeforeRipGyr());
+            String ckw = TimeWords.span(r.ckwBeforeRipGyr()) + (r.orderOfMagnitude() ? " (order of magnitude)" : "");
+            out.printf(Locale.ROOT, "  %-52s %-22s %s%n", r.system(), hf, ckw);
+        }
+        out.println("  holdfast's criterion: a circular orbit of radius R about mass M keeps its angular momentum and");
+        out.println("  comes apart when k = (27/256) G M / R^3 (its effective potential loses its barrier); a planet's");
+        out.println("  surface when k = G M / R^3. CKW 2003 rule: P sqrt(2|1+3w|) / (6 pi |1+w|) before the rip, P the");
+        out.println("  period (Caldwell, Kamionkowski & Weinberg 2003, PRL 91, 071301). The atom: that rule for the Bohr");
+        out.println("  orbit, an order-of-magnitude estimate only (atoms are held by electromagnetism).");
+    }
+
+    static void text(PrintWriter out, String title, ExpansionTable t, List<double[]> samples,
+            List<RipLadder.Rung> ladder) {
         Cosmology c = t.cosmology();
         out.println(title);
         out.printf(Locale.ROOT, "  %s%n%n", c);
@@ -84,6 +134,7 @@ final class ExpansionReport {
         out.printf(Locale.ROOT, "%n  k_de is the dark-energy push per unit distance, a''/a from dark energy alone.%n");
         out.printf(Locale.ROOT, "  valid for t = %.6g to %.6g Gyr (H0 = %.4g km/s/Mpc = %.6g /Gyr)%n",
                 t.earliestGyr(), t.latestGyr(), c.h0Kms(), Units.hubbleToPerGyr(c.h0Kms()));
+        ladderText(out, t, ladder);
     }
 
     private static void line(PrintWriter out, String what, String value) {

@@ -38,6 +38,16 @@ public final class RunProgress implements RunObserver {
         this.spanMyr = Math.abs(untilGyr - startGyr) * 1e3;
     }
 
+    /**
+     * Where a scenario's run will end unless stopped: run.until_gyr, or the end of its expansion
+     * history when a big rip or crunch (or the Big Bang, backward) comes first, so that the
+     * estimate of a run that stops before a rip counts toward the rip, not toward until_gyr.
+     */
+    public static double plannedEndGyr(org.holdfast.scenario.Scenario s) {
+        double until = s.run().untilGyr();
+        return Math.max(s.expansion().earliestGyr(), Math.min(s.expansion().latestGyr(), until));
+    }
+
     /** Whether standard output is an interactive terminal. */
     public static boolean onTerminal() {
         return System.console() != null && System.getenv("CI") == null;

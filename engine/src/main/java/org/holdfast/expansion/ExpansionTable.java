@@ -12,7 +12,7 @@ import org.holdfast.units.Units;
  * big rip, turnaround and crunch, onset of acceleration).
  *
  * <p>The table runs from 10 kyr after the Big Bang (or a millionth of the age, if that is
- * shorter) to whichever comes first of: a millionth of the time from the Big Bang to a big
+ * shorter) to whichever comes first of: a ten-millionth of the time from the Big Bang to a big
  * rip before the rip, a = e^600 on the way to a rip, the crunch (mirrored from the Big Bang,
  * since a recollapsing Friedmann universe retraces its expansion), or the far-future horizon
  * the cosmology was solved with. Lookups in the middle segment cost one multiply, a cast and a

@@ -31,7 +31,7 @@ final class TableBuilder {
     static final double EARLY_STEP = 0.05;
     static final double MID_STEP_HUBBLE = 0.01;
     static final double LATE_STEP = 0.05;
-    static final double RIP_MARGIN = 1e-6;
+    static final double RIP_MARGIN = 1e-7;
     static final double LN_A_CAP = 600;
     static final double LN_RHO_CAP = 500;
     static final double SCAN_STEP = 0.05;

@@ -135,6 +135,18 @@ public final class TabulatedW implements DarkEnergyModel {
         return -3.0 * (lnA + integralW(lnA) - offsetToday);
     }
 
+    /** The table's points: {a[], w[]}, copies (to write them out and read them back). */
+    public double[][] knots() {
+        int n = x.length;
+        double[] a = new double[n];
+        double[] w = new double[n];
+        for (int i = 0; i < n; i++) {
+            a[i] = Math.exp(x[i]);
+            w[i] = i < n - 1 ? c[i][0] : wLast;
+        }
+        return new double[][] {a, w};
+    }
+
     /** Smallest and largest tabulated scale factor. */
     public double[] range() {
         return new double[] {Math.exp(x[0]), Math.exp(x[x.length - 1])};

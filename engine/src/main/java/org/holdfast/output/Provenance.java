@@ -6,7 +6,10 @@ import java.util.List;
 import java.util.Map;
 
 import org.holdfast.expansion.Cosmology;
+import org.holdfast.expansion.DarkEnergyModel;
 import org.holdfast.expansion.ExpansionTable;
+import org.holdfast.expansion.TabulatedW;
+import org.holdfast.expansion.W0WaDarkEnergy;
 import org.holdfast.group.GalaxySpec;
 import org.holdfast.run.RunSettings;
 import org.holdfast.scenario.Scenario;
@@ -30,10 +33,31 @@ public final class Provenance {
         m.put("omega_k", c.omegaK());
         m.put("omega_de", c.omegaDe());
         m.put("dark_energy", c.darkEnergy().describe());
+        m.put("dark_energy_model", darkEnergyModel(c.darkEnergy()));
         if (t != null) {
             m.put("age_gyr", t.ageGyr());
             m.put("rip_gyr", t.ripGyr().isPresent() ? t.ripGyr().getAsDouble() : null);
             m.put("crunch_gyr", t.crunchGyr().isPresent() ? t.crunchGyr().getAsDouble() : null);
+        }
+        return m;
+    }
+
+    /**
+     * The dark-energy model as numbers a reader can rebuild it from: {w0, wa} for the
+     * cosmological constant, constant w and w0-wa, {a, w} (the points) for a w(a) table.
+     */
+    public static Map<String, Object> darkEnergyModel(DarkEnergyModel d) {
+        Map<String, Object> m = new LinkedHashMap<>();
+        if (d instanceof TabulatedW t) {
+            double[][] k = t.knots();
+            m.put("a", k[0]);
+            m.put("w", k[1]);
+        } else if (d instanceof W0WaDarkEnergy cpl) {
+            m.put("w0", cpl.w0());
+            m.put("wa", cpl.wa());
+        } else {
+            m.put("w0", d.w(1.0));
+            m.put("wa", 0.0);
         }
         return m;
     }

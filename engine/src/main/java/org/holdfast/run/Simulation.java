@@ -142,7 +142,7 @@ public final class Simulation implements RunView, AutoCloseable {
         boolean limited = endsEarly();
         double end = plannedEndGyr();
         double every = settings.snapshotEveryMyr() * Units.MYR;
-        SnapshotClock clock = new SnapshotClock(start, end, every);
+        SnapshotClock clock = SnapshotClock.of(start, end, every, history);
         observers.forEach(o -> o.init(this));
         snapshot(observers);
         StopReason reason = null;

@@ -29,6 +29,38 @@ class ExpansionCommandTest {
         return new ObjectMapper().readTree(r.out());
     }
 
+    /**
+     * The rip ladder: the scenario's own pair as the group (1.6e12 Msun, 400 kpc apart), then a
+     * galaxy, a solar system, a planet, an atom; the rough rule is Caldwell, Kamionkowski &amp;
+     * Weinberg 2003's P sqrt(2|1+3w|)/(6 pi |1+w|), a factor 0.2807 of the period for w = -1.5.
+     */
+    @Test
+    void phantomPairGetsTheRipLadder() throws IOException {
+        JsonNode j = json(CommandRunner.run("expansion", SCENARIOS.resolve("tethered-pair.toml").toString(),
+                "--set", "cosmology.dark_energy.w0=-1.5", "--json"));
+        JsonNode ladder = j.get("rip_ladder");
+        assertEquals(5, ladder.size());
+        assertEquals("group", ladder.get(0).get("system").asText());
+        assertEquals(1.6e12, ladder.get(0).get("mass_msun").asDouble(), 1);
+        assertEquals(400, ladder.get(0).get("radius_kpc").asDouble(), 1e-9);
+        double rip = j.get("rip_gyr").asDouble();
+        for (JsonNode r : ladder) {
+            assertEquals(0.2807, r.get("ckw2003_before_rip_gyr").asDouble() / r.get("period_gyr").asDouble(), 1e-4);
+            assertEquals(rip, r.get("ckw2003_gyr").asDouble() + r.get("ckw2003_before_rip_gyr").asDouble(), 1e-12);
+        }
+        JsonNode atom = ladder.get(4);
+        assertEquals("atom", atom.get("system").asText());
+        assertEquals("order of magnitude", atom.get("estimate").asText());
+        assertTrue(atom.get("holdfast_before_rip_gyr").isNull());
+        String text = CommandRunner.run("expansion", SCENARIOS.resolve("tethered-pair.toml").toString(),
+                "--set", "cosmology.dark_energy.w0=-1.5").out();
+        assertTrue(text.contains("Rip ladder") && text.contains("order of magnitude"), text);
+        // no rip, no ladder
+        JsonNode lambda = json(CommandRunner.run("expansion", SCENARIOS.resolve("lambda-steady.toml").toString(),
+                "--json"));
+        assertTrue(lambda.get("rip_ladder").isNull());
+    }
+
     /** H0 = 70, Om = 0.3 flat Lambda: 13.467 Gyr (Carroll, Press &amp; Turner 1992 closed form; see ClosedFormHistoriesTest). */
     @Test
     void lambdaScenarioGivesTheKnownAge() throws IOException {

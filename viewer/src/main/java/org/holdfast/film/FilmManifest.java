@@ -51,17 +51,25 @@ final class FilmManifest {
                 return;
             }
             if (Files.isDirectory(dir)) {
+                // another worker of the same film may be writing its manifest or a frame right now:
+                // its temporary files (hidden, ending in .part) do not make the folder another film's
                 try (var s = Files.list(dir)) {
-                    if (s.findAny().isPresent()) {
+                    if (s.anyMatch(p -> !p.getFileName().toString().startsWith("."))) {
                         throw new ScenarioException("--out", null, dir + " is not empty and holds no " + FILE
                                 + "; choose another --out or remove that folder");
                     }
                 }
             }
             Files.createDirectories(dir);
-            Path tmp = dir.resolve(FILE + ".part");
+            // a name of this worker's own: workers of one film starting together each write the
+            // same manifest and rename it into place, the last rename winning with the same bytes
+            Path tmp = dir.resolve("." + FILE + "." + ProcessHandle.current().pid() + ".part");
             JSON.writeValue(tmp.toFile(), m);
             Files.move(tmp, file, StandardCopyOption.REPLACE_EXISTING, StandardCopyOption.ATOMIC_MOVE);
+            if (!JSON.readTree(file.toFile()).equals(JSON.valueToTree(m))) {
+                throw new ScenarioException("--out", null, dir + " was claimed at the same moment by a different film"
+                        + " (see its " + FILE + "); choose another --out");
+            }
         } catch (IOException e) {
             throw new UncheckedIOException("cannot write " + file, e);
         }
@@ -81,8 +89,9 @@ final class FilmManifest {
         m.put("clock", film.clock().describe());
         m.put("camera", cameraOption == null ? "film" : cameraOption);
         m.put("follow", film.follow());
-        m.put("eye_first_kpc", eye(film, 0));
-        m.put("eye_last_kpc", eye(film, film.filmSecondOf(film.frameCount())));
+        m.put("eye_first_kpc", eye(film, film.cameraSecondOf(1)));
+        m.put("eye_last_kpc", eye(film, film.cameraSecondOf(film.frameCount())));
+        m.put("look", film.look().toString());
         m.put("overlays", film.overlays().stream().map(o -> o.name().toLowerCase(Locale.ROOT)).sorted().toList());
         return m;
     }

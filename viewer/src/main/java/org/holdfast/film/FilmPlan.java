@@ -89,7 +89,8 @@ public final class FilmPlan {
                 film.has("from_gyr") ? Double.NaN : run.firstGyr()));
         putTime(overrides, "film.to_gyr", time("--to-gyr", o.toGyr(), run,
                 film.has("to_gyr") ? Double.NaN : run.lastGyr()));
-        FilmSpec spec = FilmReader.read(root, o.still(), run.initialNames());
+        FilmSpec spec = FilmReader.read(root, o.still(), run.initialNames(),
+                new org.holdfast.replay.ReplayScene(run).overviewDistanceKpc());
         checkWithinRun(spec, run, film);
         if (spec.frameCount() > MAX_FRAMES) {
             String where = o.seconds() != null ? "--seconds" : o.fps() != null ? "--fps" : film.where("length_s");
@@ -113,8 +114,7 @@ public final class FilmPlan {
             }
             var c = cam.camera(Projection.FLAT);
             CameraTrack fixed = (s, dest) -> RunFrameSource.poseOf(c, dest);
-            spec = new FilmSpec(spec.lengthS(), spec.frameRate(), spec.view(), spec.widthPx(), spec.heightPx(),
-                    spec.domeSpanDeg(), spec.domeTiltDeg(), spec.stretch(), spec.clock(), fixed, spec.overlays(), null);
+            spec = spec.withCamera(fixed, null);
         }
         return spec;
     }

@@ -33,14 +33,21 @@ import org.joml.Vector3d;
  * from_gyr = 0             # simulated time at the first frame
  * to_gyr = 40              # required, simulated time at the last frame
  * final_gyr = 41.5         # countdown only: the rip, or a horizon of your choice
- * camera = "keyframes"     # keyframes | orbit | approach
+ * camera = "orbit"        # orbit (the default) | keyframes | approach
  * follow = "Aldermere"     # optional: the camera's track is relative to this member's centre
+ * text_deg = 3             # dome: height of the clock's first line, degrees of the dome
+ * text_placement = "unidirectional"   # dome: unidirectional (front sweet spot) | concentric (zenith)
+ * glow_deg = 0.0247        # sigma of a star's glow, degrees (galaxy centres 3.2 times it)
+ * ladder = false           # the rip ladder's rungs as events
+ * png_bits = 8             # 8 | 16 bits per channel
+ * overlay_layer = false    # text and marks into overlay_NNNNNN.png (RGBA) beside each frame
  *
- * [film.show]              # overlays, each true by default
- * clock = true, scale_factor = true, scale_bar = true, names = true, events = true
+ * [film.show]              # overlays and trails, each true by default
+ * clock = true, scale_factor = true, scale_bar = true, names = true, events = true, trails = true
  *
- * [film.orbit]             # camera = "orbit"
- * centre_kpc = [0, 0, 0], up = [0, 0, 1], radius_kpc = 800, rise_kpc = 200, turns = 1, fov_deg = 50
+ * [film.orbit]             # camera = "orbit"; every key has a default
+ * centre_kpc = [0, 0, 0], up = [0, 0, 1], radius_kpc = 800, rise_kpc = 200, turns = 0.25, fov_deg = 50
+ *   (radius and rise default to the run's overview distance seen from 20 degrees up)
  *
  * [film.approach]          # camera = "approach"
  * start_kpc = [...], end_kpc = [...], look_at_kpc = [0, 0, 0], up = [0, 0, 1], fov_deg = 50
@@ -67,8 +74,11 @@ public final class FilmReader {
      * @throws ScenarioException if the table is missing or any key is wrong
      */
     public static FilmSpec read(Node root) {
-        return read(root, false, null);
+        return read(root, false, null, DEFAULT_OVERVIEW_KPC);
     }
+
+    /** The overview distance of an orbit when no run says how large the group is, kpc. */
+    static final double DEFAULT_OVERVIEW_KPC = 1000;
 
     /**
      * As {@link #read(Node)}; {@code still} lifts the even sizes a video needs, for one PNG, and
@@ -76,11 +86,12 @@ public final class FilmReader {
      *
      * @throws ScenarioException if the table is missing or any key is wrong
      */
-    static FilmSpec read(Node root, boolean still, List<String> members) {
+    static FilmSpec read(Node root, boolean still, List<String> members, double overviewKpc) {
         Node film = root.requireTable("film");
         film.allowOnly("length_s", "frame_rate", "view", "frame_px", "dome_span_deg", "dome_tilt_deg", "stretch",
                 "asinh_gain", "asinh_softening", "linear_gain", "clock", "from_gyr", "to_gyr", "final_gyr", "camera",
-                "show", "orbit", "approach", "keyframe", "follow");
+                "show", "orbit", "approach", "keyframe", "follow", "text_deg", "text_placement", "glow_deg", "ladder",
+                "png_bits", "overlay_layer");
         double lengthS = film.positive("length_s");
         int rate = (int) film.integer("frame_rate", 1, 240, 30);
         String view = film.choice("view", VIEWS, "flat");
@@ -97,14 +108,35 @@ public final class FilmReader {
                 ? Stretch.linear(film.positive("linear_gain", 1))
                 : Stretch.asinh(film.positive("asinh_gain", 0.4), film.positive("asinh_softening", 9));
         FilmClock clock = clock(film, FilmSpec.lastFrameS(lengthS, rate));
-        CameraTrack camera = camera(film, lengthS);
+        CameraTrack camera = camera(film, lengthS, overviewKpc);
         String follow = film.has("follow") ? film.string("follow") : null;
         if (follow != null && members != null && !members.contains(follow)) {
             throw film.error("follow", "no member named '" + follow + "' in this run; its members: "
                     + String.join(", ", members));
         }
         return new FilmSpec(lengthS, rate, view, size[0], size[1], span, tilt, stretch, clock, camera, overlays(film),
-                follow);
+                follow, look(film));
+    }
+
+    private static FilmLook look(Node film) {
+        FilmLook d = FilmLook.standard();
+        double text = film.number("text_deg", d.textDeg());
+        if (!(text >= 0.5 && text <= 20)) {
+            throw film.error("text_deg", "must be 0.5 to 20 degrees of the dome (got " + fmt(text) + ")");
+        }
+        String placement = film.choice("text_placement", FilmLook.PLACEMENTS, d.placement());
+        double glow = film.number("glow_deg", d.glowDeg());
+        if (!(glow > 0 && glow <= 5)) {
+            throw film.error("glow_deg", "must be above 0 and at most 5 degrees (got " + fmt(glow) + ")");
+        }
+        long bits = film.integer("png_bits", 8, 16, 8);
+        if (bits != 8 && bits != 16) {
+            throw film.error("png_bits", "must be 8 or 16 (got " + bits + ")");
+        }
+        Node show = film.table("show");
+        boolean trails = show == null || show.bool("trails", true);
+        return new FilmLook(text, placement, glow, trails, film.bool("ladder", false), bits == 16,
+                film.bool("overlay_layer", false));
     }
 
     private static int[] frameSize(Node film, String view, boolean still) {
@@ -155,8 +187,10 @@ public final class FilmReader {
         return FilmClock.countdown(endS, from, to, fin);
     }
 
-    private static CameraTrack camera(Node film, double lengthS) {
-        String kind = film.choice("camera", CAMERAS, "keyframes");
+    private static CameraTrack camera(Node film, double lengthS, double overviewKpc) {
+        // without camera: whatever camera table is there, else the default orbit
+        String implied = film.hasInFile("keyframe") ? "keyframes" : film.hasInFile("approach") ? "approach" : "orbit";
+        String kind = film.choice("camera", CAMERAS, implied);
         for (String other : List.of("orbit", "approach", "keyframe")) {
             boolean mine = other.equals(kind) || ("keyframe".equals(other) && "keyframes".equals(kind));
             if (!mine && film.hasInFile(other)) {
@@ -164,19 +198,26 @@ public final class FilmReader {
             }
         }
         return switch (kind) {
-            case "orbit" -> orbit(film.requireTable("orbit"), lengthS);
+            case "orbit" -> orbit(film.table("orbit"), lengthS, overviewKpc);
             case "approach" -> approach(film.requireTable("approach"), lengthS);
             default -> keyframes(film);
         };
     }
 
-    private static CameraTrack orbit(Node n, double lengthS) {
+    /** An orbit; a missing table or key takes the default film's: 20 degrees up, a quarter turn. */
+    private static CameraTrack orbit(Node n, double lengthS, double overviewKpc) {
+        double elevation = Math.toRadians(20);
+        double radius0 = overviewKpc * Math.cos(elevation);
+        double rise0 = overviewKpc * Math.sin(elevation);
+        if (n == null) {
+            return new OrbitTrack(new Vector3d(), new Vector3d(0, 0, 1), radius0, rise0, 0.25, lengthS, 50);
+        }
         n.allowOnly("centre_kpc", "up", "radius_kpc", "rise_kpc", "turns", "fov_deg");
         Vector3d centre = vec(n, "centre_kpc", new Vector3d());
         Vector3d up = direction(n, "up");
-        double radius = n.positive("radius_kpc");
-        double rise = n.number("rise_kpc", 0);
-        double turns = n.number("turns", 1);
+        double radius = n.positive("radius_kpc", radius0);
+        double rise = n.number("rise_kpc", n.has("radius_kpc") ? 0 : rise0);
+        double turns = n.number("turns", 0.25);
         return new OrbitTrack(centre, up, radius, rise, turns, lengthS, fov(n));
     }
 
@@ -228,6 +269,7 @@ public final class FilmReader {
         for (Overlay o : Overlay.values()) {
             keys.add(o.name().toLowerCase(Locale.ROOT));
         }
+        keys.add("trails");
         show.allowOnly(keys.toArray(String[]::new));
         for (Overlay o : Overlay.values()) {
             if (!show.bool(o.name().toLowerCase(Locale.ROOT), true)) {

@@ -20,10 +20,54 @@ import org.holdfast.render.projection.Projection;
  */
 public record FilmSpec(double lengthS, int frameRate, String view, int widthPx, int heightPx, double domeSpanDeg,
         double domeTiltDeg, Stretch stretch, FilmClock clock, CameraTrack camera, Set<Overlay> overlays,
-        String follow) {
+        String follow, FilmLook look) {
 
     public FilmSpec {
         overlays = Set.copyOf(overlays);
+    }
+
+    /** A film with the standard look. */
+    public FilmSpec(double lengthS, int frameRate, String view, int widthPx, int heightPx, double domeSpanDeg,
+            double domeTiltDeg, Stretch stretch, FilmClock clock, CameraTrack camera, Set<Overlay> overlays,
+            String follow) {
+        this(lengthS, frameRate, view, widthPx, heightPx, domeSpanDeg, domeTiltDeg, stretch, clock, camera, overlays,
+                follow, FilmLook.standard());
+    }
+
+    /** The same film with another camera and follow. */
+    FilmSpec withCamera(CameraTrack track, String followName) {
+        return new FilmSpec(lengthS, frameRate, view, widthPx, heightPx, domeSpanDeg, domeTiltDeg, stretch, clock,
+                track, overlays, followName, look);
+    }
+
+    /**
+     * The camera track's second for frame {@code index}: the film's length spread over the
+     * frames, so that the first frame shows the camera at 0 s and the last exactly at
+     * {@code length_s} (the last keyframe, the orbit's last turn), however the frames fall.
+     */
+    public double cameraSecondOf(int index) {
+        int n = frameCount();
+        return n > 1 ? lengthS * (index - 1) / (n - 1) : 0;
+    }
+
+    /** The camera track's second at film second {@code filmS} (a still between frames). */
+    public double cameraSecondAt(double filmS) {
+        int n = frameCount();
+        return n > 1 ? filmS * lengthS / ((n - 1) / (double) frameRate) : 0;
+    }
+
+    /** Pixels per degree at the centre of this film's frames. */
+    public double pxPerDeg() {
+        return switch (view) {
+            case "dome" -> widthPx / domeSpanDeg;
+            case "panorama" -> heightPx / 180.0;
+            default -> RenderSettings.pxPerDegFlat(heightPx);
+        };
+    }
+
+    /** Whether the rip ladder's rungs are events of this film. */
+    public boolean ladder() {
+        return look.ladder();
     }
 
     /** Number of frames: length x frame rate, rounded. */
@@ -64,6 +108,14 @@ public record FilmSpec(double lengthS, int frameRate, String view, int widthPx, 
         RenderSettings s = new RenderSettings().stretch(stretch).noOverlays();
         for (Overlay o : overlays) {
             s.overlay(o, true);
+        }
+        s.angularGlow(look.glowDeg(), pxPerDeg());
+        if (!look.trails()) {
+            s.trailBrightness(0);
+        }
+        if ("dome".equals(view)) {
+            // never below 8 px, however small a preview
+            s.domeText(Math.max(8, Math.min(2000, look.textDeg() * pxPerDeg())), "concentric".equals(look.placement()));
         }
         return s;
     }

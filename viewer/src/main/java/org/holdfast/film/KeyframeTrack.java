@@ -24,6 +24,8 @@ public final class KeyframeTrack implements CameraTrack {
     private final double[] t;
     private final double[][] eye;
     private final double[] fov;
+    /** Distance from the eye to the point looked at, per keyframe (the scale bar's depth). */
+    private final double[] focus;
     private final Quaterniond[] orientation;
     private final Quaterniond scratch = new Quaterniond();
     private final Vector3d eyeScratch = new Vector3d();
@@ -39,6 +41,7 @@ public final class KeyframeTrack implements CameraTrack {
         t = new double[n];
         eye = new double[3][n];
         fov = new double[n];
+        focus = new double[n];
         orientation = new Quaterniond[n];
         for (int i = 0; i < n; i++) {
             Keyframe k = sorted.get(i);
@@ -50,6 +53,7 @@ public final class KeyframeTrack implements CameraTrack {
             eye[1][i] = k.eyeKpc().y();
             eye[2][i] = k.eyeKpc().z();
             fov[i] = k.fovDeg();
+            focus[i] = k.eyeKpc().distance(k.targetKpc());
             orientation[i] = CameraPose.orientationLookingAt(k.eyeKpc(), k.targetKpc(), k.up(), new Quaterniond());
             if (i > 0 && orientation[i].dot(orientation[i - 1]) < 0) {
                 // take the short way round: q and -q are the same rotation
@@ -62,17 +66,18 @@ public final class KeyframeTrack implements CameraTrack {
     public CameraPose poseAt(double filmS, CameraPose dest) {
         int n = t.length;
         if (n == 1 || filmS <= t[0]) {
-            return dest.set(eyeScratch.set(eye[0][0], eye[1][0], eye[2][0]), orientation[0], fov[0]);
+            return dest.set(eyeScratch.set(eye[0][0], eye[1][0], eye[2][0]), orientation[0], fov[0]).focus(focus[0]);
         }
         if (filmS >= t[n - 1]) {
-            return dest.set(eyeScratch.set(eye[0][n - 1], eye[1][n - 1], eye[2][n - 1]), orientation[n - 1], fov[n - 1]);
+            return dest.set(eyeScratch.set(eye[0][n - 1], eye[1][n - 1], eye[2][n - 1]), orientation[n - 1], fov[n - 1])
+                    .focus(focus[n - 1]);
         }
         int i = segment(filmS);
         double u = (filmS - t[i]) / (t[i + 1] - t[i]);
         eyeScratch.set(spline(eye[0], i, filmS), spline(eye[1], i, filmS), spline(eye[2], i, filmS));
         orientation[i].slerp(orientation[i + 1], u, scratch);
         double f = Math.max(1e-3, Math.min(179, spline(fov, i, filmS)));
-        return dest.set(eyeScratch, scratch, f);
+        return dest.set(eyeScratch, scratch, f).focus(focus[i] + (focus[i + 1] - focus[i]) * u);
     }
 
     private int segment(double s) {

@@ -42,6 +42,8 @@ import picocli.CommandLine.Spec;
             "20 s, a quarter orbit around the group, a clock over the whole run (a countdown",
             "when the run stopped before a big rip). Options replace the table's keys. Run",
             "the same command again to carry on: finished frames are kept and skipped.",
+            "Beside the frames, cues.csv lists each frame's timecode, time, scale factor,",
+            "clock text and events; --frame-range lets several workers share one folder.",
             "",
             "Examples:",
             "  holdfast evolve scenarios/hollin-group.toml    # writes hollin-group-run/",
@@ -50,7 +52,8 @@ import picocli.CommandLine.Spec;
             "  holdfast render hollin-group-run --projection dome --size 2048 --fps 30 \\",
             "      --seconds 40 --out dome-frames --video hollin-dome.mp4",
             "  holdfast render hollin-group-run --still 4.2 --camera 40,25,350 \\",
-            "      --out poster.png"
+            "      --out poster.png",
+            "  holdfast render hollin-group-run --out frames --frame-range 1-300"
         })
 public final class RenderCommand implements Callable<Integer> {
 
@@ -94,6 +97,12 @@ public final class RenderCommand implements Callable<Integer> {
     @Option(names = "--out", paramLabel = "DIR",
             description = "Folder for the frames (default NAME-VIEW-frames here), or the PNG of a --still.")
     Path out;
+
+    @Option(names = "--frame-range", paramLabel = "FIRST-LAST",
+            description = "Draw only frames FIRST to LAST (1-based, inclusive) of the film, e.g. 1-300: several "
+                    + "workers, or the nodes of a render farm, may draw parts of one film into one --out folder at "
+                    + "the same time, and the frames are the same bytes as one worker's.")
+    String frameRange;
 
     @Option(names = "--video", paramLabel = "FILE.mp4", description = "Also encode the frames with ffmpeg (H.264, yuv420p).")
     Path video;
@@ -165,6 +174,12 @@ public final class RenderCommand implements Callable<Integer> {
         if (still == null && out != null && Files.exists(out) && !Files.isDirectory(out)) {
             throw new ScenarioException("--out", null, out + " is a file, not a folder for frames");
         }
+        if (frameRange != null && still != null) {
+            throw new ScenarioException("--frame-range", null, "a still is one picture; leave out --frame-range or --still");
+        }
+        if (frameRange != null) {
+            range(frameRange, FilmPlan.MAX_FRAMES);
+        }
         if (video != null && !lowerName(video).endsWith(".mp4")) {
             throw new ScenarioException("--video", null, "expected a file name ending in .mp4 (got " + video + ")");
         }
@@ -177,7 +192,7 @@ public final class RenderCommand implements Callable<Integer> {
         ReplayScene scene = new ReplayScene(run);
         try (FrameRenderer r = new FrameRenderer(film.projection(), settings(film, scene))) {
             SceneFrame frame = scene.at(still);
-            CameraPose pose = film.camera().poseAt(filmS, new CameraPose());
+            CameraPose pose = film.camera().poseAt(film.cameraSecondAt(filmS), new CameraPose());
             if (film.follow() != null) {
                 new FollowTarget(film.follow(), run.events()).shift(frame, pose);
             }
@@ -192,36 +207,118 @@ public final class RenderCommand implements Callable<Integer> {
 
     private int renderFilm(PrintWriter o, RunArchive run, FilmSpec film) throws IOException, InterruptedException {
         Path dir = out != null ? out : Path.of(stem() + "-" + film.view() + "-frames");
+        int n = film.frameCount();
+        int[] span = frameRange == null ? new int[] {1, n} : range(frameRange, n);
         FilmManifest.claim(dir, input, film, camera);
         FrameFiles files = new FrameFiles(dir);
-        int n = film.frameCount();
-        say(o, String.format(Locale.ROOT, "rendering %d frames (%dx%d %s, %d per second, %s to %s Gyr) into %s", n,
+        List<CueSheet.Note> notes = ladderNotes(film, run);
+        CueSheet.write(dir, film, run, notes);
+        say(o, String.format(Locale.ROOT, "rendering %s (%dx%d %s, %d per second, %s to %s Gyr) into %s",
+                span[0] == 1 && span[1] == n ? n + " frames" : "frames " + span[0] + " to " + span[1] + " of " + n,
                 film.widthPx(), film.heightPx(), film.view(), film.frameRate(), FilmPlan.shown(film.clock().simGyr(0)),
                 FilmPlan.shown(film.clock().simGyr(film.filmSecondOf(n))), dir));
         ReplayScene scene = new ReplayScene(run);
         CameraPose pose = new CameraPose();
         FollowTarget follow = film.follow() == null ? null : new FollowTarget(film.follow(), run.events());
-        FrameProgress progress = new FrameProgress(o, n, FrameProgress.onTerminal(), quiet);
+        int count = span[1] - span[0] + 1;
+        FrameProgress progress = new FrameProgress(o, count, FrameProgress.onTerminal(), quiet);
         try (FrameRenderer r = new FrameRenderer(film.projection(), settings(film, scene)); progress) {
-            for (int i = 1; i <= n; i++) {
+            for (int i = span[0]; i <= span[1]; i++) {
                 if (files.isComplete(i)) {
                     progress.frameDone(false);
                     continue;
                 }
-                double s = film.filmSecondOf(i);
-                double t = Math.max(run.earliestGyr(), Math.min(run.latestGyr(), film.clock().simGyr(s)));
-                SceneFrame frame = scene.at(t);
-                film.camera().poseAt(s, pose);
+                SceneFrame frame = scene.at(frameGyr(film, run, i));
+                film.camera().poseAt(film.cameraSecondOf(i), pose);
                 if (follow != null) {
                     follow.shift(frame, pose);
                 }
-                files.write(i, r.render(frame, pose));
+                setNotes(frame, notes);
+                FilmLook look = film.look();
+                if (!look.deep() && !look.overlayLayer()) {
+                    files.write(i, r.render(frame, pose));
+                } else {
+                    BufferedImage picture = look.deep() ? r.renderDeep(frame, pose, !look.overlayLayer())
+                            : r.renderPicture(frame, pose);
+                    if (look.overlayLayer()) {
+                        // the layer first: a frame file present means both are complete
+                        files.writeLayer(i, r.overlayLayer(frame, pose));
+                    }
+                    files.write(i, picture);
+                }
                 progress.frameDone(true);
             }
         }
         say(o, String.format(Locale.ROOT, "%d frames drawn, %d already there, in %.1f s", progress.drawn(),
-                n - progress.drawn(), progress.seconds()));
-        return video == null ? 0 : encode(dir, film);
+                count - progress.drawn(), progress.seconds()));
+        if (video == null) {
+            return 0;
+        }
+        for (int i = 1; i <= n; i++) {
+            if (!files.isComplete(i)) {
+                // a worker of a split film: the others are still drawing
+                say(o, "frame " + i + " is not drawn yet, so no video was made; run this command again with"
+                        + " --video once every --frame-range is done");
+                return 0;
+            }
+        }
+        return encode(dir, film);
+    }
+
+    /** The rip ladder's rungs passed by the frame's time, as notes under its events. */
+    private static void setNotes(SceneFrame frame, List<CueSheet.Note> notes) {
+        if (notes.isEmpty()) {
+            return;
+        }
+        List<String> passed = new ArrayList<>();
+        for (CueSheet.Note n : notes) {
+            if (n.tGyr() <= frame.tGyr()) {
+                passed.add(n.text());
+            }
+        }
+        frame.setNotes(passed);
+    }
+
+    /** The simulated time frame {@code index} shows: the film clock's, kept inside the run. */
+    static double frameGyr(FilmSpec film, RunArchive run, int index) {
+        double t = film.clock().simGyr(film.filmSecondOf(index));
+        return Math.max(run.earliestGyr(), Math.min(run.latestGyr(), t));
+    }
+
+    /**
+     * FIRST-LAST, 1-based and inclusive, within a film of {@code frames} frames.
+     *
+     * @throws ScenarioException naming --frame-range
+     */
+    static int[] range(String text, int frames) {
+        java.util.regex.Matcher m = java.util.regex.Pattern.compile("\\s*(\\d{1,7})\\s*-\\s*(\\d{1,7})\\s*").matcher(text);
+        if (!m.matches()) {
+            throw new ScenarioException("--frame-range", null, "expected FIRST-LAST, two frame numbers from 1, e.g. "
+                    + "1-300; got '" + text + "'");
+        }
+        int first = Integer.parseInt(m.group(1));
+        int last = Integer.parseInt(m.group(2));
+        if (first < 1 || last < first) {
+            throw new ScenarioException("--frame-range", null, "FIRST must be at least 1 and LAST at least FIRST (got "
+                    + text.trim() + ")");
+        }
+        if (last > frames) {
+            throw new ScenarioException("--frame-range", null, "this film has " + frames + " frames; LAST is "
+                    + last);
+        }
+        return new int[] {first, last};
+    }
+
+    /** The rungs of the rip ladder inside the film, when its [film] table asks for them. */
+    private static List<CueSheet.Note> ladderNotes(FilmSpec film, RunArchive run) {
+        List<CueSheet.Note> out = new ArrayList<>();
+        if (!film.ladder() || run.history() == null) {
+            return out;
+        }
+        for (RipLadderNotes.Note n : RipLadderNotes.of(run)) {
+            out.add(new CueSheet.Note(n.tGyr(), n.text()));
+        }
+        return out;
     }
 
     private int encode(Path dir, FilmSpec film) throws IOException, InterruptedException {

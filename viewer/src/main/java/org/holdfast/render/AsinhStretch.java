@@ -59,6 +59,31 @@ final class AsinhStretch implements Stretch {
         }
     }
 
+    @Override
+    public void toDeepPixels(LightBuffer light, short[] rgb16, int rowFrom, int rowTo) {
+        int w = light.width();
+        float[] rgb = light.rgb;
+        for (int k = rowFrom * w, end = rowTo * w; k < end; k++) {
+            double r = rgb[3 * k];
+            double g = rgb[3 * k + 1];
+            double b = rgb[3 * k + 2];
+            double i = (r + g + b) / 3;
+            double f = i > 0 ? asinh(alpha * q * i) / (q * i) : 0;
+            r *= f;
+            g *= f;
+            b *= f;
+            double max = Math.max(r, Math.max(g, b));
+            if (max > 1) {
+                r /= max;
+                g /= max;
+                b /= max;
+            }
+            rgb16[3 * k] = Stretch.toShort(r);
+            rgb16[3 * k + 1] = Stretch.toShort(g);
+            rgb16[3 * k + 2] = Stretch.toShort(b);
+        }
+    }
+
     static double asinh(double x) {
         // x >= 0 here; this form loses nothing for small x and never overflows for large x
         return x < 1e150 ? Math.log(x + Math.sqrt(x * x + 1)) : Math.log(2 * x);

@@ -16,6 +16,8 @@ public final class CameraPose {
     private final Vector3d eyeKpc = new Vector3d(0, 0, 100);
     private final Quaterniond orientation = new Quaterniond();
     private double fovDeg = 50;
+    /** Distance from the eye to the point looked at, kpc; NaN when the pose was set without one. */
+    private double focusKpc = Double.NaN;
     private final Matrix3d scratch = new Matrix3d();
 
     /** Sets the pose from an eye position, a point to look at and an up direction. */
@@ -23,10 +25,22 @@ public final class CameraPose {
         orientationLookingAt(eyeKpc, targetKpc, up, orientation);
         this.eyeKpc.set(eyeKpc);
         this.fovDeg = fovDeg;
+        this.focusKpc = eyeKpc.distance(targetKpc);
         return this;
     }
 
-    /** Sets the pose directly. */
+    /** Sets the distance to the point looked at (the scale bar's depth), kpc. */
+    public CameraPose focus(double kpc) {
+        this.focusKpc = kpc;
+        return this;
+    }
+
+    /** Distance from the eye to the point looked at, kpc; NaN when unknown. */
+    public double focusKpc() {
+        return focusKpc;
+    }
+
+    /** Sets the pose directly; the distance to the point looked at is kept (a shift moves both). */
     public CameraPose set(Vector3dc eyeKpc, Quaterniondc orientation, double fovDeg) {
         this.eyeKpc.set(eyeKpc);
         this.orientation.set(orientation).normalize();
@@ -36,7 +50,9 @@ public final class CameraPose {
 
     /** Copies another pose. */
     public CameraPose set(CameraPose other) {
-        return set(other.eyeKpc, other.orientation, other.fovDeg);
+        set(other.eyeKpc, other.orientation, other.fovDeg);
+        focusKpc = other.focusKpc;
+        return this;
     }
 
     /**

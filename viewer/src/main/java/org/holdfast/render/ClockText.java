@@ -25,6 +25,19 @@ public final class ClockText {
         return tGyr > 0 ? "in " + amount : amount + " ago";
     }
 
+    /**
+     * The clock's first line for a frame: the time left before the big rip in units that shrink
+     * as it nears ("rip in 3.21 million years", "rip in 41,200 years"), three figures so that it
+     * changes from frame to frame of a countdown; {@link #words} when the universe does not rip
+     * (ripGyr NaN) or the rip is past.
+     */
+    public static String headline(double tGyr, double ripGyr) {
+        if (Double.isFinite(ripGyr) && ripGyr > tGyr) {
+            return "rip in " + org.holdfast.units.TimeWords.span(ripGyr - tGyr);
+        }
+        return words(tGyr);
+    }
+
     /** The time in Gyr from today with its sign: "+12.40 Gyr from today". */
     public static String gyr(double tGyr) {
         return String.format(Locale.ROOT, "%+.2f Gyr from today", tGyr);

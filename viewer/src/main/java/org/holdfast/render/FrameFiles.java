@@ -42,6 +42,16 @@ public final class FrameFiles {
         return String.format(Locale.ROOT, "frame_%06d.png", index);
     }
 
+    /** The file name of the overlay layer of frame {@code index}: overlay_000001.png. */
+    public static String layerName(int index) {
+        return "overlay" + name(index).substring("frame".length());
+    }
+
+    /** Writes the overlay layer of frame {@code index} (an RGBA PNG), under a temporary name first. */
+    public Path writeLayer(int index, BufferedImage image) {
+        return writeAs(folder.resolve(layerName(index)), layerName(index), image);
+    }
+
     public Path path(int index) {
         return folder.resolve(name(index));
     }
@@ -53,8 +63,13 @@ public final class FrameFiles {
 
     /** Writes frame {@code index}: to a temporary file, then renamed into place. */
     public Path write(int index, BufferedImage image) {
-        Path target = path(index);
-        Path temp = folder.resolve("." + name(index) + ".part");
+        return writeAs(path(index), name(index), image);
+    }
+
+    private Path writeAs(Path target, String name, BufferedImage image) {
+        // a temporary name of this worker's own: several workers may draw into one folder
+        Path temp = folder.resolve("." + name + "." + ProcessHandle.current().pid() + "."
+                + Thread.currentThread().getId() + ".part");
         try {
             if (!ImageIO.write(image, "png", temp.toFile())) {
                 throw new IOException("no PNG writer for this image type");

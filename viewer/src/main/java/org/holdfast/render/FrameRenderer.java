@@ -62,7 +62,8 @@ public final class FrameRenderer implements AutoCloseable {
         this.splats = new SplatLayer(new SplatKernel(settings.splatSigmaPx()), width, height);
         this.markers = new MarkerLayer(new SplatKernel(settings.galaxySigmaPx()), height);
         this.bands = SplatLayer.bands(height);
-        this.overlays = new OverlayPainter(settings.overlays(), "dome".equals(projection.name()), height);
+        this.overlays = new OverlayPainter(settings.overlays(), "dome".equals(projection.name()), height,
+                settings.domeTextPx(), settings.concentric());
         this.pool = new ForkJoinPool(settings.threads());
         this.image = new BufferedImage(width, height, BufferedImage.TYPE_INT_RGB);
         this.pixels = ((DataBufferInt) image.getRaster().getDataBuffer()).getData();
@@ -96,6 +97,52 @@ public final class FrameRenderer implements AutoCloseable {
         }
         return image;
     }
+
+    /**
+     * Renders one frame at 16 bits per channel (a 48-bit RGB PNG when written): light, stretch
+     * and, when {@code withOverlays}, the overlays drawn on it. The image is reused by the next call.
+     */
+    public BufferedImage renderDeep(SceneFrame scene, CameraPose pose, boolean withOverlays) {
+        draw(scene, pose, null);
+        if (deep == null) {
+            java.awt.color.ColorSpace cs = java.awt.color.ColorSpace.getInstance(java.awt.color.ColorSpace.CS_sRGB);
+            java.awt.image.ComponentColorModel cm = new java.awt.image.ComponentColorModel(cs, new int[] {16, 16, 16},
+                    false, false, java.awt.Transparency.OPAQUE, java.awt.image.DataBuffer.TYPE_USHORT);
+            deep = new BufferedImage(cm, cm.createCompatibleWritableRaster(width, height), false, null);
+            deepPixels = ((java.awt.image.DataBufferUShort) deep.getRaster().getDataBuffer()).getData();
+        }
+        settings.stretch().toDeepPixels(light, deepPixels, 0, height);
+        if (withOverlays && overlays.any()) {
+            overlays.paint(deep, scene, galaxyPx, kpcPerPixel(scene, pose));
+        }
+        return deep;
+    }
+
+    /** Renders the picture alone, without the overlays (8 bits per channel). */
+    public BufferedImage renderPicture(SceneFrame scene, CameraPose pose) {
+        draw(scene, pose, settings.stretch());
+        return image;
+    }
+
+    /**
+     * The overlays of the frame drawn last (by {@link #renderPicture} or {@link #renderDeep}) on
+     * a transparent RGBA image of the frame's size, for compositing over the picture in an
+     * editor. The image is reused by the next call.
+     */
+    public BufferedImage overlayLayer(SceneFrame scene, CameraPose pose) {
+        if (layer == null) {
+            layer = new BufferedImage(width, height, BufferedImage.TYPE_INT_ARGB);
+        }
+        java.util.Arrays.fill(((DataBufferInt) layer.getRaster().getDataBuffer()).getData(), 0);
+        if (overlays.any()) {
+            overlays.paint(layer, scene, galaxyPx, kpcPerPixel(scene, pose));
+        }
+        return layer;
+    }
+
+    private BufferedImage deep;
+    private short[] deepPixels;
+    private BufferedImage layer;
 
     /**
      * Draws the linear light of a frame (tracers, trails, galaxy centres) into {@link #light()},
@@ -223,25 +270,30 @@ public final class FrameRenderer implements AutoCloseable {
         }
     }
 
-    /** Size of a pixel at the depth of the galaxies' mean centre, flat projection only. */
+    /**
+     * Size of a pixel at the distance of the point the camera looks at (flat projection only):
+     * the camera's own geometry, so the bar stays true when members fly far apart. A pose with no
+     * such point falls back to the depth of the nearest galaxy in front of the camera.
+     */
     private double kpcPerPixel(SceneFrame scene, CameraPose pose) {
-        if (!(projection instanceof FlatProjection flat) || scene.galaxyCount() == 0) {
+        if (!(projection instanceof FlatProjection flat)) {
             return Double.NaN;
         }
-        double mx = 0;
-        double my = 0;
-        double mz = 0;
-        int n = scene.galaxyCount();
-        for (int g = 0; g < n; g++) {
-            mx += scene.galaxyX(g) / n;
-            my += scene.galaxyY(g) / n;
-            mz += scene.galaxyZ(g) / n;
+        double focus = pose.focusKpc();
+        if (focus > 0 && Double.isFinite(focus)) {
+            return focus / flat.focalPx();
         }
-        double wx = mx - pose.eyeKpc().x();
-        double wy = my - pose.eyeKpc().y();
-        double wz = mz - pose.eyeKpc().z();
-        double depth = -(view[6] * wx + view[7] * wy + view[8] * wz);
-        return depth > 0 ? depth / flat.focalPx() : Double.NaN;
+        double depth = Double.POSITIVE_INFINITY;
+        for (int g = 0; g < scene.galaxyCount(); g++) {
+            double wx = scene.galaxyX(g) - pose.eyeKpc().x();
+            double wy = scene.galaxyY(g) - pose.eyeKpc().y();
+            double wz = scene.galaxyZ(g) - pose.eyeKpc().z();
+            double d = -(view[6] * wx + view[7] * wy + view[8] * wz);
+            if (d > 0) {
+                depth = Math.min(depth, d);
+            }
+        }
+        return Double.isFinite(depth) ? depth / flat.focalPx() : Double.NaN;
     }
 
     @Override

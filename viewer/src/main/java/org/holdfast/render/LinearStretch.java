@@ -26,4 +26,13 @@ final class LinearStretch implements Stretch {
                     | Stretch.toByte(gain * rgb[3 * k + 1]) << 8 | Stretch.toByte(gain * rgb[3 * k + 2]);
         }
     }
+
+    @Override
+    public void toDeepPixels(LightBuffer light, short[] rgb16, int rowFrom, int rowTo) {
+        int w = light.width();
+        float[] rgb = light.rgb;
+        for (int k = 3 * rowFrom * w, end = 3 * rowTo * w; k < end; k++) {
+            rgb16[k] = Stretch.toShort(gain * rgb[k]);
+        }
+    }
 }

@@ -24,7 +24,8 @@ import java.util.Set;
 final class OverlayPainter {
 
     private static final Color PAPER = new Color(0xEDE6D6);
-    private static final Color SLATE = new Color(0x9FA8B8);
+    /** The second clock line: cool and light, well clear of the sky (it was a dim slate). */
+    private static final Color SLATE = new Color(0xC8D0DE);
     private static final Color GOLD = new Color(0xF6D58E);
     private static final Color SHADOW = new Color(0, 0, 0, 170);
     private static final int MAX_EVENTS = 4;
@@ -38,13 +39,33 @@ final class OverlayPainter {
     private int[] labelXY = new int[0];
     private boolean[] labelPlaced = new boolean[0];
 
+    /** Where dome text sits: radii from the centre as fractions of the disc's radius (below: +). */
+    private final double clockRadius;
+    private final double eventsRadius;
+
     OverlayPainter(Set<Overlay> overlays, boolean dome, int height) {
+        this(overlays, dome, height, Double.NaN, false);
+    }
+
+    /**
+     * @param domeTextPx on a dome, the clock's first line in pixels (NaN: from the height)
+     * @param concentric on a dome, text round the zenith rather than in the front sweet spot
+     */
+    OverlayPainter(Set<Overlay> overlays, boolean dome, int height, double domeTextPx, boolean concentric) {
         this.overlays = overlays;
         this.dome = dome;
         String family = pickFamily();
-        int size = Math.max(11, Math.round(height / 34f));
+        boolean sized = dome && Double.isFinite(domeTextPx);
+        int size = sized ? (int) Math.round(domeTextPx) : Math.max(11, Math.round(height / 34f));
         this.large = new Font(family, Font.PLAIN, size);
-        this.small = new Font(family, Font.PLAIN, Math.max(10, Math.round(size * 0.68f)));
+        // the second line and the events: 0.8 of the first, never below 12 px
+        this.small = new Font(family, Font.PLAIN, Math.max(12, Math.round(size * (sized ? 0.8f : 0.72f))));
+        // unidirectional: the clock about 25 degrees and the events 40-50 degrees above the front
+        // horizon of a 180-degree dome, where a seated audience looks (common practice); the
+        // older default put events near the upper rim, behind the audience. Concentric: both
+        // round the zenith, which every seat faces equally.
+        this.clockRadius = !sized ? 0.72 : concentric ? 0.16 : 0.72;
+        this.eventsRadius = !sized ? -0.68 : concentric ? -0.10 : 0.42;
     }
 
     private static String pickFamily() {
@@ -127,10 +148,10 @@ final class OverlayPainter {
         FontMetrics fs = g.getFontMetrics(small);
         String second = clock && factor ? ClockText.gyr(scene.tGyr()) + "   " + ClockText.scaleFactor(scene.scaleFactor())
                 : clock ? ClockText.gyr(scene.tGyr()) : ClockText.scaleFactor(scene.scaleFactor());
-        int y2 = dome ? (int) (h * 0.86) : h - margin;
+        int y2 = dome ? (int) (h * (0.5 + 0.5 * clockRadius)) : h - margin;
         int y1 = y2 - fs.getHeight();
         if (clock) {
-            String first = ClockText.words(scene.tGyr());
+            String first = ClockText.headline(scene.tGyr(), scene.ripGyr());
             g.setFont(large);
             text(g, first, dome ? (w - fl.stringWidth(first)) / 2 : margin, y1, PAPER);
         }
@@ -147,12 +168,21 @@ final class OverlayPainter {
         int first = Math.max(0, last - MAX_EVENTS);
         g.setFont(small);
         FontMetrics fs = g.getFontMetrics(small);
-        int y = dome ? (int) (h * 0.16) : margin + fs.getAscent();
+        int lines = Math.min(MAX_EVENTS, last - first);
+        int y = !dome ? margin + fs.getAscent()
+                : eventsRadius < 0 ? (int) (h * (0.5 + 0.5 * eventsRadius)) - (lines - 1) * fs.getHeight()
+                : (int) (h * (0.5 + 0.5 * eventsRadius));
         for (int k = first; k < last; k++) {
             FateEvent e = events.get(k);
             String line = e.describe() + "  \u00b7  at " + ClockText.gyrShort(e.tGyr());
             Color c = k == last - 1 ? GOLD : GOLD.darker();
             text(g, line, dome ? (w - fs.stringWidth(line)) / 2 : margin, y, c);
+            y += fs.getHeight();
+        }
+        List<String> notes = scene.notes();
+        for (int k = Math.max(0, notes.size() - 2); k < notes.size(); k++) {
+            String line = notes.get(k);
+            text(g, line, dome ? (w - fs.stringWidth(line)) / 2 : margin, y, k == notes.size() - 1 ? PAPER : SLATE);
             y += fs.getHeight();
         }
     }

@@ -21,6 +21,8 @@ public final class RenderSettings {
     private Stretch stretch = Stretch.asinh(0.4, 9.0);
     private final EnumSet<Overlay> overlays = EnumSet.allOf(Overlay.class);
     private int threads = Runtime.getRuntime().availableProcessors();
+    private double domeTextPx = Double.NaN;
+    private boolean concentric;
 
     /** Gaussian sigma of a star or flow-tracer splat, in pixels (default 0.5). */
     public RenderSettings splatSigmaPx(double v) {
@@ -91,6 +93,50 @@ public final class RenderSettings {
     /** Switches every overlay off (for scientific stills and pixel tests). */
     public RenderSettings noOverlays() {
         overlays.clear();
+        return this;
+    }
+
+    /**
+     * Text on a dome: the height of the clock's first line in pixels (from degrees of the dome),
+     * and whether the dome is concentric (text round the zenith) rather than unidirectional (text
+     * in the front sweet spot, low in the dome master). Unset: sizes follow the frame's height.
+     */
+    public RenderSettings domeText(double firstLinePx, boolean concentricDome) {
+        domeTextPx = checkRange("dome text (px)", firstLinePx, 4, 2000);
+        concentric = concentricDome;
+        return this;
+    }
+
+    /** Height of the clock's first line on a dome in pixels, NaN when it follows the frame's height. */
+    public double domeTextPx() {
+        return domeTextPx;
+    }
+
+    /** Whether dome text is placed for a concentric dome. */
+    public boolean concentric() {
+        return concentric;
+    }
+
+    /**
+     * Star glow (Gaussian sigma) in degrees of the look holdfast had at 1920x1080 with 50 degrees
+     * of field: 0.5 px there.
+     */
+    public static final double DEFAULT_GLOW_DEG = 0.5 / pxPerDegFlat(1080);
+
+    /** Pixels per degree at the centre of a flat frame {@code heightPx} high with 50 degrees of field. */
+    public static double pxPerDegFlat(int heightPx) {
+        return 0.5 * heightPx / Math.tan(Math.toRadians(25)) * Math.PI / 180;
+    }
+
+    /**
+     * Glow sizes as angles: a star's sigma {@code glowDeg} and a galaxy centre's 3.2 times it,
+     * at {@code pxPerDeg}, kept within the kernels' range of 0.3 to 8 px; a small preview then
+     * looks like the large master.
+     */
+    public RenderSettings angularGlow(double glowDeg, double pxPerDeg) {
+        double sigma = glowDeg * pxPerDeg;
+        splatSigmaPx(Math.max(0.3, Math.min(8, sigma)));
+        galaxySigmaPx(Math.max(0.3, Math.min(8, 3.2 * sigma)));
         return this;
     }
 

@@ -19,6 +19,8 @@ public final class SceneFrame {
 
     private double tGyr;
     private double scaleFactor = 1;
+    /** The big rip of the run's universe, Gyr from today; NaN when there is none. */
+    private double ripGyr = Double.NaN;
 
     private int galaxyCount;
     private String[] names = new String[0];
@@ -143,6 +145,30 @@ public final class SceneFrame {
 
     public double tGyr() {
         return tGyr;
+    }
+
+    private List<String> notes = List.of();
+
+    /** Sets notes shown under the events (the rip ladder's rungs passed so far); copied. */
+    public SceneFrame setNotes(List<String> text) {
+        this.notes = List.copyOf(text);
+        return this;
+    }
+
+    /** Notes shown under the events, oldest first. */
+    public List<String> notes() {
+        return notes;
+    }
+
+    /** Sets the big rip the clock counts down to (NaN: none). */
+    public SceneFrame setRip(double ripGyr) {
+        this.ripGyr = ripGyr;
+        return this;
+    }
+
+    /** The big rip of the run's universe, Gyr from today; NaN when there is none. */
+    public double ripGyr() {
+        return ripGyr;
     }
 
     public double scaleFactor() {

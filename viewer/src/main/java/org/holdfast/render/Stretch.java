@@ -13,6 +13,19 @@ public interface Stretch {
      */
     void toPixels(LightBuffer light, int[] argb, int rowFrom, int rowTo);
 
+    /**
+     * Writes 16-bit display values (0 to 65535, three per pixel, red first) for rows
+     * [rowFrom, rowTo) of {@code light} into {@code rgb16}, indexed 3 (x + y * width) + channel:
+     * the same stretch as {@link #toPixels}, kept to 16 bits for grading and dome masters.
+     */
+    void toDeepPixels(LightBuffer light, short[] rgb16, int rowFrom, int rowTo);
+
+    /** Rounds a display value in [0, 1] to 16 bits (as an unsigned short). */
+    static short toShort(double v) {
+        int b = (int) (v * 65535 + 0.5);
+        return (short) (b < 0 ? 0 : b > 65535 ? 65535 : b);
+    }
+
     /** The display value in [0, 1] of a grey pixel whose three channels all hold {@code light}. */
     double grey(double light);
 

@@ -12,8 +12,11 @@ import org.holdfast.units.Units;
 /**
  * Fills a {@link SceneFrame} for any time of a run from its two nearest snapshots. Galaxies and
  * tracers both move along the cubic Hermite interpolant of their saved positions and velocities
- * (exact for motion that is cubic in time between snapshots); the scale factor, shown only as a
- * number, is blended linearly. A galaxy that merges between two snapshots glides from its own
+ * in comoving coordinates, scaled by a(t) (exact for motion that is cubic in time between
+ * snapshots in the comoving frame, and for anything carried by the expansion: near a rip,
+ * where a grows by a large factor between snapshots, nothing overshoots); the scale factor and
+ * the rate H come from the run's expansion history (an older run folder without a recorded
+ * cosmology falls back to plain Hermite curves and a linear blend of the snapshots' a). A galaxy that merges between two snapshots glides from its own
  * last state towards its survivor's next one and disappears at the merger's time. Trails follow
  * the same curves through the saved track samples up to now (from {@code tracks.csv}, see
  * {@link TrailCurves}) and end at the current position.
@@ -65,14 +68,36 @@ public final class ReplayScene {
         int i = run.bracket(tGyr);
         Snapshot s0 = run.snapshot(i);
         Snapshot s1 = run.snapshotCount() > 1 ? run.snapshot(i + 1) : s0;
+        double a = weights(s0, s1, tGyr);
         fillGalaxies(s0, s1, tGyr);
         fillTracers(s0, s1, tGyr);
-        double a = s1 == s0 ? s0.scaleFactor()
-                : s0.scaleFactor() + (s1.scaleFactor() - s0.scaleFactor()) * (tGyr - s0.tGyr()) / (s1.tGyr() - s0.tGyr());
         frame.setClock(tGyr, a);
+        frame.setRip(run.ripGyr());
         showEvents(tGyr);
         return frame;
     }
+
+    /**
+     * Fills {@link #w} for the interval [s0, s1] at t and returns the scale factor at t: from the
+     * run's expansion history when it is known (positions then interpolate in comoving
+     * coordinates), else blended from the snapshots' values (positions then interpolate as they
+     * are, an older run folder).
+     */
+    private double weights(Snapshot s0, Snapshot s1, double t) {
+        org.holdfast.expansion.ExpansionTable h = run.history();
+        if (s1 == s0) {
+            return h != null && t >= h.earliestGyr() && t <= h.latestGyr() ? h.scaleFactor(t) : s0.scaleFactor();
+        }
+        double a = TrailCurves.weights(h, s0.tGyr(), s1.tGyr(), t, w);
+        return !Double.isNaN(a) ? a
+                : s0.scaleFactor() + (s1.scaleFactor() - s0.scaleFactor()) * (t - s0.tGyr()) / (s1.tGyr() - s0.tGyr());
+    }
+
+    /** Weights of the trail's last piece. */
+    private final double[] pw = new double[8];
+
+    /** Interpolation weights of the current frame (see {@link SnapshotInterpolation#comovingWeights}). */
+    private final double[] w = new double[8];
 
     /** Sets the events up to t, only when they differ from the last frame's (setEvents copies them). */
     private void showEvents(double tGyr) {
@@ -161,14 +186,14 @@ public final class ReplayScene {
         }
     }
 
-    private static double coordinate(Snapshot s0, int g, Snapshot s1, int j, int axis, double t, double k) {
-        return SnapshotInterpolation.hermite(s0.tGyr(), s0.positionKpc()[axis][g], s0.velocityKms()[axis][g] * k,
-                s1.tGyr(), s1.positionKpc()[axis][j], s1.velocityKms()[axis][j] * k, t);
+    private double coordinate(Snapshot s0, int g, Snapshot s1, int j, int axis, double t, double k) {
+        return w[0] * s0.positionKpc()[axis][g] + w[1] * s0.velocityKms()[axis][g] * k
+                + w[2] * s1.positionKpc()[axis][j] + w[3] * s1.velocityKms()[axis][j] * k;
     }
 
-    private static double rate(Snapshot s0, int g, Snapshot s1, int j, int axis, double t, double k) {
-        return SnapshotInterpolation.hermiteRate(s0.tGyr(), s0.positionKpc()[axis][g], s0.velocityKms()[axis][g] * k,
-                s1.tGyr(), s1.positionKpc()[axis][j], s1.velocityKms()[axis][j] * k, t);
+    private double rate(Snapshot s0, int g, Snapshot s1, int j, int axis, double t, double k) {
+        return w[4] * s0.positionKpc()[axis][g] + w[5] * s0.velocityKms()[axis][g] * k
+                + w[6] * s1.positionKpc()[axis][j] + w[7] * s1.velocityKms()[axis][j] * k;
     }
 
     /** The merger that took {@code name} away between two snapshot times, or null. */
@@ -218,7 +243,7 @@ public final class ReplayScene {
             trailZ[g] = new double[room];
         }
         if (m > 0) {
-            double[][] dense = curves.dense(names[g], track);
+            double[][] dense = curves.dense(names[g], track, run.history());
             System.arraycopy(dense[0], 0, trailT[g], 0, prefix);
             System.arraycopy(dense[1], 0, trailX[g], 0, prefix);
             System.arraycopy(dense[2], 0, trailY[g], 0, prefix);
@@ -237,12 +262,22 @@ public final class ReplayScene {
         double c = Units.KMS_TO_KPC_PER_GYR;
         double t0 = track[0][k];
         int p = TrailCurves.PIECES;
+        if (t == t0) {
+            for (int i = 1; i < p; i++) {
+                trailT[g][at + i - 1] = t;
+                trailX[g][at + i - 1] = gx[g];
+                trailY[g][at + i - 1] = gy[g];
+                trailZ[g][at + i - 1] = gz[g];
+            }
+            return;
+        }
         for (int i = 1; i < p; i++) {
             double ti = t0 + (t - t0) * i / p;
+            TrailCurves.weights(run.history(), t0, t, ti, pw);
             trailT[g][at + i - 1] = ti;
-            trailX[g][at + i - 1] = SnapshotInterpolation.hermite(t0, track[1][k], track[4][k] * c, t, gx[g], gvx[g], ti);
-            trailY[g][at + i - 1] = SnapshotInterpolation.hermite(t0, track[2][k], track[5][k] * c, t, gy[g], gvy[g], ti);
-            trailZ[g][at + i - 1] = SnapshotInterpolation.hermite(t0, track[3][k], track[6][k] * c, t, gz[g], gvz[g], ti);
+            trailX[g][at + i - 1] = pw[0] * track[1][k] + pw[1] * track[4][k] * c + pw[2] * gx[g] + pw[3] * gvx[g];
+            trailY[g][at + i - 1] = pw[0] * track[2][k] + pw[1] * track[5][k] * c + pw[2] * gy[g] + pw[3] * gvy[g];
+            trailZ[g][at + i - 1] = pw[0] * track[3][k] + pw[1] * track[6][k] * c + pw[2] * gz[g] + pw[3] * gvz[g];
         }
     }
 
@@ -263,9 +298,9 @@ public final class ReplayScene {
             float[][] v0 = s0.tracerKms();
             float[][] p1 = s1.tracerKpc();
             float[][] v1 = s1.tracerKms();
-            SnapshotInterpolation.hermite(s0.tGyr(), p0[0], v0[0], s1.tGyr(), p1[0], v1[0], t, k, m, tx);
-            SnapshotInterpolation.hermite(s0.tGyr(), p0[1], v0[1], s1.tGyr(), p1[1], v1[1], t, k, m, ty);
-            SnapshotInterpolation.hermite(s0.tGyr(), p0[2], v0[2], s1.tGyr(), p1[2], v1[2], t, k, m, tz);
+            SnapshotInterpolation.combine(w, p0[0], v0[0], p1[0], v1[0], k, m, tx);
+            SnapshotInterpolation.combine(w, p0[1], v0[1], p1[1], v1[1], k, m, ty);
+            SnapshotInterpolation.combine(w, p0[2], v0[2], p1[2], v1[2], k, m, tz);
         }
         frame.setTracers(m, tx, ty, tz, s0.tracerHost());
     }

@@ -350,6 +350,22 @@ public final class RunArchive {
         return ripGyr;
     }
 
+    /**
+     * The run's expansion history, rebuilt from its recorded cosmology (see
+     * {@link RunCosmology}); null for an older run folder that did not record it.
+     */
+    public org.holdfast.expansion.ExpansionTable history() {
+        if (!historyRead) {
+            history = RunCosmology.read(dir, Math.max(Math.abs(firstGyr()), Math.abs(lastGyr())));
+            // a run still being written may not have its resolved.json yet: look again later
+            historyRead = history != null || summaryRead;
+        }
+        return history;
+    }
+
+    private org.holdfast.expansion.ExpansionTable history;
+    private boolean historyRead;
+
     /** Whether the run stopped because the rip was near. */
     public boolean stoppedBeforeRip() {
         return stoppedBeforeRip;

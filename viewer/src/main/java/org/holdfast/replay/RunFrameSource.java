@@ -133,8 +133,10 @@ public final class RunFrameSource implements FrameSource {
             if (renderer != null) {
                 renderer.close();
             }
+            // glows as angles, as a film's: the window previews what render draws
             RenderSettings s = settingsFor(view.layers(), new RenderSettings())
-                    .referenceDistanceKpc(scene.overviewDistanceKpc());
+                    .referenceDistanceKpc(scene.overviewDistanceKpc())
+                    .angularGlow(RenderSettings.DEFAULT_GLOW_DEG, dome ? side / 180.0 : RenderSettings.pxPerDegFlat(height));
             renderer = new FrameRenderer(dome ? new DomeProjection(side) : new FlatProjection(width, height, c.fovDeg()), s);
             rendererKey = key;
         }

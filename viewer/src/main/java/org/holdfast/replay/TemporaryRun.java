@@ -56,7 +56,8 @@ public final class TemporaryRun implements AutoCloseable {
         Path dir = parent.resolve("run");
         try {
             List<RunObserver> watchers = progress == null ? List.of()
-                    : List.of(new RunProgress(progress, RunProgress.onTerminal(), s.run().startGyr(), s.run().untilGyr()));
+                    : List.of(new RunProgress(progress, RunProgress.onTerminal(), s.run().startGyr(),
+                    RunProgress.plannedEndGyr(s)));
             FateRun.Outcome r = new RunWriter(s, dir, Version.number()).run(sim, watchers);
             if (progress != null) {
                 progress.printf(Locale.ROOT, "evolved to %.4g Gyr in %.1f s: %s%n", r.result().endGyr(),

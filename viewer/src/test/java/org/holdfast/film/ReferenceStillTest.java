@@ -18,7 +18,9 @@ import org.junit.jupiter.api.io.TempDir;
  * {@code hollin-still-1.5.png} (160x90, t = 1.5 Gyr, camera 40,20,2500, every overlay off so
  * that no font enters the picture). It was made by this test's own command with
  * {@code -Dholdfast.writeReference=true}, after checking the picture by eye; remake it the same
- * way when the look is changed on purpose (or the engine's orbits change).
+ * way when the look is changed on purpose (or the engine's orbits change). Last remade when glow
+ * sizes became angles (a 160x90 still now shows the small glows of a large master, scaled down)
+ * and the palette grew to sixteen colours.
  *
  * <p>Tolerance: at most 2 levels (of 255) in any channel, on at most 0.5% of the pixels. Java
  * arithmetic is reproducible, but Math.log, exp and the trigonometric functions may differ by an
