@@ -18,6 +18,7 @@ import org.holdfast.run.NewtonianLimitWatch;
 import org.holdfast.run.RunObserver;
 import org.holdfast.run.Simulation;
 import org.holdfast.scenario.Scenario;
+import org.holdfast.scenario.ScenarioException;
 import org.holdfast.units.Units;
 
 import picocli.CommandLine.Command;
@@ -59,6 +60,9 @@ public final class EvolveCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
+        if (until != null && !Double.isFinite(until)) {
+            throw new ScenarioException("--until", null, "must be a finite number of Gyr from today, got " + until);
+        }
         Scenario s = scenario.read(until == null ? Double.NaN : until);
         Path dirPath = RunFolder.choose(out, s.file());
         Simulation sim = FateRun.build(s, 0);

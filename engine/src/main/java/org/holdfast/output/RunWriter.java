@@ -142,7 +142,8 @@ public final class RunWriter {
         // when a member's speed relative to the centre of mass first passed 0.1 c (null: never)
         m.put("newtonian_limit_passed_gyr", Provenance.finiteOrNull(limit.passedGyr()));
         m.put("newtonian_limit_member", limit.member());
-        m.put("newtonian_limit_kms", Units.NEWTONIAN_LIMIT_FRACTION_OF_C * Units.C_KMS);
+        // the member's speed then, km/s (just above 0.1 c); null, like the two above, when no member passed it
+        m.put("newtonian_limit_kms", Provenance.finiteOrNull(limit.speedKpcPerGyr() * Units.KPC_PER_GYR_TO_KMS));
         List<Map<String, Object>> members = new ArrayList<>();
         for (MemberFate f : r.members()) {
             Map<String, Object> e = new LinkedHashMap<>();

@@ -15,6 +15,9 @@ public final class RunReader {
     /** Default snapshot interval, Myr. */
     public static final double DEFAULT_SNAPSHOT_MYR = 100.0;
 
+    /** The most snapshots one run writes. */
+    public static final long MAX_SNAPSHOTS = 100_000;
+
     private RunReader() {
     }
 
@@ -46,6 +49,7 @@ public final class RunReader {
         double step = hasStep ? run.positive("step_myr") : Double.NaN;
         double accuracy = hasStep ? Double.NaN : run.positive("accuracy", DEFAULT_ACCURACY);
         double snap = run.positive("snapshot_every_myr", DEFAULT_SNAPSHOT_MYR);
+        checkSnapshotCount(run, start, until, snap, untilOverrideGyr);
         boolean de = run.bool("dark_energy_force", true);
         boolean matter = run.bool("background_matter", false);
         long seed = run.integer("seed", Long.MIN_VALUE, Long.MAX_VALUE, 1L);
@@ -64,6 +68,27 @@ public final class RunReader {
         }
         return new RunSettings(start, until, Scheme.of(schemeName), accuracy, step, snap, de, matter, seed,
                 friction, log, mergeWithin);
+    }
+
+    /**
+     * Refuses a run that would write more than {@link #MAX_SNAPSHOTS} snapshots (a mistyped
+     * interval, 1e-9 Myr, would otherwise fill a disk before anyone stops it), before anything is
+     * written.
+     */
+    private static void checkSnapshotCount(Node run, double start, double until, double snapMyr,
+            double untilOverrideGyr) {
+        double count = Math.abs(until - start) * 1e3 / snapMyr;
+        if (count > MAX_SNAPSHOTS) {
+            String key = "snapshot_every_myr";
+            String msg = String.format(java.util.Locale.ROOT,
+                    "%s Myr over a run of %s Gyr asks for %.3g snapshots; at most %,d are written"
+                    + " (an interval of at least %s Myr)", Node.fmt(snapMyr), Node.fmt(Math.abs(until - start)),
+                    count, MAX_SNAPSHOTS, Node.fmt(Math.abs(until - start) * 1e3 / MAX_SNAPSHOTS));
+            if (!run.has(key) && !Double.isNaN(untilOverrideGyr)) {
+                throw new ScenarioException("--until", null, msg);
+            }
+            throw run.error(key, msg);
+        }
     }
 
     /**

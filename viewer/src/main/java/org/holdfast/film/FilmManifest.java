@@ -51,6 +51,12 @@ final class FilmManifest {
                 return;
             }
             if (Files.isDirectory(dir)) {
+                // what a killed render leaves before its manifest is in place: temporary files only
+                try (var s = Files.list(dir)) {
+                    for (Path p : s.filter(p -> isOurPart(p.getFileName().toString())).toList()) {
+                        Files.deleteIfExists(p);
+                    }
+                }
                 try (var s = Files.list(dir)) {
                     if (s.findAny().isPresent()) {
                         throw new ScenarioException("--out", null, dir + " is not empty and holds no " + FILE
@@ -65,6 +71,10 @@ final class FilmManifest {
         } catch (IOException e) {
             throw new UncheckedIOException("cannot write " + file, e);
         }
+    }
+
+    private static boolean isOurPart(String name) {
+        return name.equals(FILE + ".part") || name.matches("\\.frame_[0-9]{6}\\.png\\.part");
     }
 
     private static Map<String, Object> describe(Path input, FilmSpec film, String cameraOption) {

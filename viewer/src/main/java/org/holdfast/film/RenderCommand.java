@@ -11,6 +11,7 @@ import java.util.Locale;
 import java.util.Optional;
 import java.util.concurrent.Callable;
 
+import org.holdfast.output.OutputPaths;
 import org.holdfast.output.RunFolder;
 import org.holdfast.render.CameraPose;
 import org.holdfast.render.SceneFrame;
@@ -168,6 +169,13 @@ public final class RenderCommand implements Callable<Integer> {
         if (video != null && !lowerName(video).endsWith(".mp4")) {
             throw new ScenarioException("--video", null, "expected a file name ending in .mp4 (got " + video + ")");
         }
+        // a path through an ordinary file, or into a folder that cannot be written, is refused before drawing
+        if (out != null) {
+            OutputPaths.check(out, still != null ? OutputPaths.Kind.FILE : OutputPaths.Kind.FOLDER, "--out");
+        }
+        if (video != null) {
+            OutputPaths.check(video, OutputPaths.Kind.FILE, "--video");
+        }
     }
 
     private int renderStill(PrintWriter o, RunArchive run, FilmSpec film) throws IOException {
@@ -192,8 +200,39 @@ public final class RenderCommand implements Callable<Integer> {
 
     private int renderFilm(PrintWriter o, RunArchive run, FilmSpec film) throws IOException, InterruptedException {
         Path dir = out != null ? out : Path.of(stem() + "-" + film.view() + "-frames");
+        boolean folderWasThere = Files.exists(dir);
+        boolean manifestWasThere = Files.exists(dir.resolve(FilmManifest.FILE));
         FilmManifest.claim(dir, input, film, camera);
         FrameFiles files = new FrameFiles(dir);
+        List<Path> drawnNow = new ArrayList<>();
+        try {
+            drawFrames(o, run, film, dir, files, drawnNow);
+        } catch (ScenarioException e) {
+            // bad input found while drawing (a damaged snapshot): take back what this command wrote
+            undo(dir, drawnNow, !manifestWasThere, !folderWasThere);
+            throw e;
+        }
+        return video == null ? 0 : encode(dir, film);
+    }
+
+    private static void undo(Path dir, List<Path> drawn, boolean manifest, boolean folder) {
+        try {
+            for (Path p : drawn) {
+                Files.deleteIfExists(p);
+            }
+            if (manifest) {
+                Files.deleteIfExists(dir.resolve(FilmManifest.FILE));
+            }
+            if (folder) {
+                Files.deleteIfExists(dir);
+            }
+        } catch (IOException e) {
+            // not empty (someone else's files): leave the rest
+        }
+    }
+
+    private void drawFrames(PrintWriter o, RunArchive run, FilmSpec film, Path dir, FrameFiles files,
+            List<Path> drawnNow) {
         int n = film.frameCount();
         say(o, String.format(Locale.ROOT, "rendering %d frames (%dx%d %s, %d per second, %s to %s Gyr) into %s", n,
                 film.widthPx(), film.heightPx(), film.view(), film.frameRate(), FilmPlan.shown(film.clock().simGyr(0)),
@@ -215,13 +254,12 @@ public final class RenderCommand implements Callable<Integer> {
                 if (follow != null) {
                     follow.shift(frame, pose);
                 }
-                files.write(i, r.render(frame, pose));
+                drawnNow.add(files.write(i, r.render(frame, pose)));
                 progress.frameDone(true);
             }
         }
         say(o, String.format(Locale.ROOT, "%d frames drawn, %d already there, in %.1f s", progress.drawn(),
                 n - progress.drawn(), progress.seconds()));
-        return video == null ? 0 : encode(dir, film);
     }
 
     private int encode(Path dir, FilmSpec film) throws IOException, InterruptedException {
