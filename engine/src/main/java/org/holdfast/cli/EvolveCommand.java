@@ -66,8 +66,10 @@ public final class EvolveCommand implements Callable<Integer> {
         Scenario s = scenario.read(until == null ? Double.NaN : until);
         Path dirPath = RunFolder.choose(out, s.file());
         Simulation sim = FateRun.build(s, 0);
+        boolean restarted;
         try {
             RunFolder.makeFolder(dirPath, "--out");
+            restarted = RunFolder.clearInterrupted(dirPath);
         } catch (RuntimeException e) {
             sim.close();
             throw e;
@@ -77,7 +79,8 @@ public final class EvolveCommand implements Callable<Integer> {
             o.printf(Locale.ROOT, "evolving \"%s\": %d galaxies, %,d tracers, %s to %s (Gyr from today)%n",
                     s.name(), s.group().galaxies().size(), s.group().tracerCount(), fmt(s.run().startGyr()),
                     fmt(s.run().untilGyr()));
-            o.println("  in the group's centre-of-mass frame; writing to " + dirPath);
+            o.println("  in the group's centre-of-mass frame; writing to " + dirPath
+                    + (restarted ? " (it held a run killed before its end: started over)" : ""));
             String note = scenario.uncertainNote(s);
             if (note != null) {
                 o.println("  " + note);

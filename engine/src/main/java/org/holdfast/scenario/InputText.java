@@ -106,20 +106,24 @@ public final class InputText {
      * {@link #MAX_LINE_CHARS}, skipping strings and comments; reports the line where it happens.
      */
     public static void checkToml(Path file, String text) {
+        int ln = 1;
+        for (int from = 0; from < text.length(); ln++) {
+            int end = text.indexOf('\n', from);
+            end = end < 0 ? text.length() : end;
+            if (end - from > MAX_LINE_CHARS) {
+                throw new ScenarioException(file + ":" + ln, null, String.format(Locale.ROOT,
+                        "a line longer than %,d characters; holdfast reads no longer lines", MAX_LINE_CHARS));
+            }
+            from = end + 1;
+        }
         int depth = 0;
         int line = 1;
-        int lineStart = 0;
         int n = text.length();
         for (int i = 0; i < n; i++) {
             char c = text.charAt(i);
             if (c == '\n') {
                 line++;
-                lineStart = i + 1;
                 continue;
-            }
-            if (i - lineStart > MAX_LINE_CHARS) {
-                throw new ScenarioException(file + ":" + line, null, String.format(Locale.ROOT,
-                        "a line longer than %,d characters; holdfast reads no longer lines", MAX_LINE_CHARS));
             }
             if (c == '#') {
                 while (i + 1 < n && text.charAt(i + 1) != '\n') {
@@ -131,7 +135,6 @@ public final class InputText {
                 for (int j = i; j < end && j < n; j++) {
                     if (text.charAt(j) == '\n') {
                         line++;
-                        lineStart = j + 1;
                     }
                 }
                 i = end - 1;
