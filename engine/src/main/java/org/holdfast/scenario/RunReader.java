@@ -15,6 +15,12 @@ public final class RunReader {
     /** Default snapshot interval, Myr. */
     public static final double DEFAULT_SNAPSHOT_MYR = 100.0;
 
+    /** The most steps of a fixed-step run. */
+    public static final long MAX_FIXED_STEPS = 1_000_000_000L;
+
+    /** The smallest adaptive-step accuracy parameter. */
+    public static final double MIN_ACCURACY = 1e-5;
+
     /** The most snapshots one run writes. */
     public static final long MAX_SNAPSHOTS = 100_000;
 
@@ -48,6 +54,7 @@ public final class RunReader {
         }
         double step = hasStep ? run.positive("step_myr") : Double.NaN;
         double accuracy = hasStep ? Double.NaN : run.positive("accuracy", DEFAULT_ACCURACY);
+        checkStepping(run, start, until, step, accuracy);
         double snap = run.positive("snapshot_every_myr", DEFAULT_SNAPSHOT_MYR);
         checkSnapshotCount(run, start, until, snap, untilOverrideGyr);
         boolean de = run.bool("dark_energy_force", true);
@@ -68,6 +75,28 @@ public final class RunReader {
         }
         return new RunSettings(start, until, Scheme.of(schemeName), accuracy, step, snap, de, matter, seed,
                 friction, log, mergeWithin);
+    }
+
+    /**
+     * Refuses step settings that would never finish or resolve nothing: more than
+     * {@link #MAX_FIXED_STEPS} fixed steps, or an accuracy parameter outside [{@link #MIN_ACCURACY}, 1]
+     * (the adaptive step is this fraction of the shortest dynamical time: above 1 no orbit is
+     * resolved; far below 1e-5 leapfrog's truncation error, which falls as its square, is below
+     * the rounding accumulated over its millions of steps and each step buys nothing; common practice).
+     */
+    private static void checkStepping(Node run, double start, double until, double stepMyr, double accuracy) {
+        if (!Double.isNaN(stepMyr)) {
+            double steps = Math.abs(until - start) * 1e3 / stepMyr;
+            if (steps > MAX_FIXED_STEPS) {
+                throw run.error("step_myr", String.format(java.util.Locale.ROOT,
+                        "%s Myr over a run of %s Gyr is %.3g steps; at most %.0e (a step of at least %s Myr)",
+                        Node.fmt(stepMyr), Node.fmt(Math.abs(until - start)), steps, (double) MAX_FIXED_STEPS,
+                        Node.fmt(Math.abs(until - start) * 1e3 / MAX_FIXED_STEPS)));
+            }
+        } else if (accuracy < MIN_ACCURACY || accuracy > 1) {
+            throw run.error("accuracy", "must be from " + Node.fmt(MIN_ACCURACY) + " to 1 (got " + Node.fmt(accuracy)
+                    + "): the step is this fraction of the shortest dynamical time");
+        }
     }
 
     /**
