@@ -57,7 +57,7 @@ public final class RunWriter {
 
     /**
      * Runs the simulation (built from the scenario) with the fate tracker, the folder's writers
-     * and then {@code watchers}, and writes the summary and pictures. A cancelled run is written
+     * and then {@code watchers}, and writes the pictures and, last, the summary. A cancelled run is written
      * like any other, with its stop reason.
      */
     public FateRun.Outcome run(Simulation sim, List<RunObserver> watchers) {
@@ -81,11 +81,12 @@ public final class RunWriter {
         } finally {
             tracks.close();
         }
-        folder.writeJson(RunFolder.SUMMARY, summary(scenario, version, r, limit));
         if (!jvmShuttingDown()) {
             // the pictures need AWT, which refuses to start once the JVM is quitting (Ctrl+C)
             RunPlots.write(folder.dir(), recorder, r.events(), scenario.name());
         }
+        // the summary comes last: a folder with one holds a whole run, pictures included
+        folder.writeJson(RunFolder.SUMMARY, summary(scenario, version, r, limit));
         return r;
     }
 
