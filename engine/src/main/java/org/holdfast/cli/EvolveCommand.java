@@ -45,7 +45,8 @@ public final class EvolveCommand implements Callable<Integer> {
     ScenarioOptions scenario;
 
     @Option(names = "--out", paramLabel = "DIR",
-            description = "Run folder to write (must not exist or be empty); default: a new folder named after the scenario.")
+            description = "Run folder to write (must not exist, be empty, or hold a run killed before its end, which is"
+                    + " started over); default: a new folder named after the scenario.")
     Path out;
 
     @Option(names = "--until", paramLabel = "GYR",
