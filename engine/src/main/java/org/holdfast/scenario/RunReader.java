@@ -106,15 +106,24 @@ public final class RunReader {
      */
     private static void checkSnapshotCount(Node run, double start, double until, double snapMyr,
             double untilOverrideGyr) {
-        double count = Math.abs(until - start) * 1e3 / snapMyr;
+        double span = Math.abs(until - start);
+        double count = span * 1e3 / snapMyr;
         if (count > MAX_SNAPSHOTS) {
             String key = "snapshot_every_myr";
             String msg = String.format(java.util.Locale.ROOT,
                     "%s Myr over a run of %s Gyr asks for %.3g snapshots; at most %,d are written"
-                    + " (an interval of at least %s Myr)", Node.fmt(snapMyr), Node.fmt(Math.abs(until - start)),
-                    count, MAX_SNAPSHOTS, Node.fmt(Math.abs(until - start) * 1e3 / MAX_SNAPSHOTS));
-            if (!run.has(key) && !Double.isNaN(untilOverrideGyr)) {
+                    + " (an interval of at least %s Myr)", Node.fmt(snapMyr), Node.fmt(span),
+                    count, MAX_SNAPSHOTS, Node.fmt(span * 1e3 / MAX_SNAPSHOTS));
+            boolean keyOverridden = run.where(key).startsWith("--");
+            if (!(span < 1e12)) {
+                msg = "a run of " + Node.fmt(span) + " Gyr is far longer than any expansion history holdfast can follow";
+                keyOverridden = false;
+            }
+            if (!keyOverridden && !Double.isNaN(untilOverrideGyr)) {
                 throw new ScenarioException("--until", null, msg);
+            }
+            if (!(span < 1e12)) {
+                throw run.error("until_gyr", msg);
             }
             throw run.error(key, msg);
         }
