@@ -65,7 +65,7 @@ public final class EvolveCommand implements Callable<Integer> {
             throw new ScenarioException("--until", null, "must be a finite number of Gyr from today, got " + until);
         }
         Scenario s = scenario.read(until == null ? Double.NaN : until);
-        Path dirPath = RunFolder.choose(out, s.file());
+        Path dirPath = RunFolder.choose(out, s.file(), true);
         Simulation sim = FateRun.build(s, 0);
         boolean restarted;
         try {

@@ -46,14 +46,22 @@ public final class RunFolder {
     }
 
     /**
-     * Picks the folder: {@code out} if given (it must not exist, be empty, or hold a run killed
-     * before its end, which is started over), otherwise a new
+     * Picks the folder: {@code out} if given (it must not exist, or be empty), otherwise a new
      * folder named after the scenario in the working directory ({@code NAME-run},
      * {@code NAME-run-2}, ...). Nothing is created yet.
      */
     public static Path choose(Path out, Path scenarioFile) {
+        return choose(out, scenarioFile, false);
+    }
+
+    /**
+     * As {@link #choose(Path, Path)}; with {@code restart}, an {@code out} that holds a run killed
+     * before its end ({@link #isInterrupted}) is accepted too, for the caller to
+     * {@link #clearInterrupted clear} once everything else is checked.
+     */
+    public static Path choose(Path out, Path scenarioFile, boolean restart) {
         if (out != null) {
-            if (Files.exists(out) && !(Files.isDirectory(out) && (isEmpty(out) || isInterrupted(out)))) {
+            if (Files.exists(out) && !(Files.isDirectory(out) && (isEmpty(out) || restart && isInterrupted(out)))) {
                 throw new ScenarioException("--out", null, out + " already exists and is not an empty folder;"
                         + " choose another --out or remove it");
             }
