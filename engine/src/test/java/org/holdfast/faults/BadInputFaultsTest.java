@@ -257,6 +257,13 @@ class BadInputFaultsTest {
         assertEquals(0, r.exitCode(), r.err());
     }
 
+    @Test
+    void aHubbleConstantTheTableCannotDescribeIsRefused() {
+        assertRefused(CommandRunner.run("expansion", "--h0", "1e-300", "--omega-m", "0.3"),
+                "holdfast expansion: --h0: must be from 0.001 to 1e6 km/s/Mpc");
+        assertEquals(0, CommandRunner.run("expansion", "--h0", "0.001", "--omega-m", "0.3").exitCode());
+    }
+
     private ExpansionTable table(String omegaR) {
         Path f = tmp.resolve("c" + Math.abs(omegaR.hashCode()) + ".toml");
         try {
