@@ -18,6 +18,7 @@ import org.holdfast.run.NewtonianLimitWatch;
 import org.holdfast.run.RunObserver;
 import org.holdfast.run.Simulation;
 import org.holdfast.scenario.Scenario;
+import org.holdfast.scenario.ScenarioException;
 import org.holdfast.units.Units;
 
 import picocli.CommandLine.Command;
@@ -44,7 +45,8 @@ public final class EvolveCommand implements Callable<Integer> {
     ScenarioOptions scenario;
 
     @Option(names = "--out", paramLabel = "DIR",
-            description = "Run folder to write (must not exist or be empty); default: a new folder named after the scenario.")
+            description = "Run folder to write (must not exist, be empty, or hold a run killed before its end, which is"
+                    + " started over); default: a new folder named after the scenario.")
     Path out;
 
     @Option(names = "--until", paramLabel = "GYR",
@@ -59,11 +61,16 @@ public final class EvolveCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
+        if (until != null && !Double.isFinite(until)) {
+            throw new ScenarioException("--until", null, "must be a finite number of Gyr from today, got " + until);
+        }
         Scenario s = scenario.read(until == null ? Double.NaN : until);
-        Path dirPath = RunFolder.choose(out, s.file());
+        Path dirPath = RunFolder.choose(out, s.file(), true);
         Simulation sim = FateRun.build(s, 0);
+        boolean restarted;
         try {
             RunFolder.makeFolder(dirPath, "--out");
+            restarted = RunFolder.clearInterrupted(dirPath);
         } catch (RuntimeException e) {
             sim.close();
             throw e;
@@ -73,7 +80,8 @@ public final class EvolveCommand implements Callable<Integer> {
             o.printf(Locale.ROOT, "evolving \"%s\": %d galaxies, %,d tracers, %s to %s (Gyr from today)%n",
                     s.name(), s.group().galaxies().size(), s.group().tracerCount(), fmt(s.run().startGyr()),
                     fmt(s.run().untilGyr()));
-            o.println("  in the group's centre-of-mass frame; writing to " + dirPath);
+            o.println("  in the group's centre-of-mass frame; writing to " + dirPath
+                    + (restarted ? " (it held a run killed before its end: started over)" : ""));
             String note = scenario.uncertainNote(s);
             if (note != null) {
                 o.println("  " + note);

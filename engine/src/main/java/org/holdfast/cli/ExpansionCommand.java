@@ -132,6 +132,7 @@ public final class ExpansionCommand implements Callable<Integer> {
         if (dir == null || !Files.isDirectory(dir)) {
             throw new ScenarioException("--plot", null, "no such folder: " + dir);
         }
+        org.holdfast.output.OutputPaths.check(plot, org.holdfast.output.OutputPaths.Kind.FILE, "--plot");
     }
 
     private void rejectOptionsWithScenario() {

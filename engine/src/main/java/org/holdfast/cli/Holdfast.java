@@ -62,7 +62,21 @@ public final class Holdfast implements Runnable {
     }
 
     public static void main(String[] args) {
-        System.exit(commandLine().execute(args));
+        System.exit(execute(commandLine(), args));
+    }
+
+    /** Runs a command line as {@link #main} does, with even a JVM error reported as one line. */
+    public static int execute(CommandLine cl, String[] args) {
+        int code;
+        try {
+            code = cl.execute(args);
+        } catch (StackOverflowError | OutOfMemoryError e) {
+            // the readers limit what they read, so this is not the input's fault: one line, no trace
+            System.err.println("holdfast: failed: " + (e instanceof OutOfMemoryError
+                    ? "out of memory (give the JVM more with -Xmx)" : "the stack overflowed"));
+            code = EXIT_FAILURE;
+        }
+        return code;
     }
 
     /** A malformed command line: one line naming the option, a pointer to the help, exit code 2. */

@@ -157,6 +157,17 @@ public final class ThresholdCommand implements Callable<Integer> {
                     "must be later than the runs' start (%.4g Gyr from today), since fates are decided forward"
                             + " in time (got %.4g)", start, withinGyr));
         }
+        if (withinGyr != null) {
+            // the runs end at --within-gyr: what is wrong with that end is blamed on it
+            try {
+                ValueCheck.readAtEveryValue(scenario, Overrides.parse(set).asMap(), List.of(ends), withinGyr);
+            } catch (ScenarioException e) {
+                if ("--until".equals(e.where())) {
+                    throw new ScenarioException("--within-gyr", e.key(), e.getMessage().substring("--until: ".length()));
+                }
+                throw e;
+            }
+        }
         if (member != null) {
             check.requireGalaxy("--member", member);
         }

@@ -37,7 +37,10 @@ public final class Cosmology {
      * @throws InvalidCosmologyException naming the first parameter out of range
      */
     public Cosmology(double h0Kms, double omegaM, double omegaR, double omegaK, DarkEnergyModel darkEnergy) {
-        check("h0", h0Kms, h0Kms > 0 && h0Kms < 1e6, "must be > 0 km/s/Mpc (the universe expands today)");
+        check("h0", h0Kms, h0Kms > 0, "must be > 0 km/s/Mpc (the universe expands today)");
+        // outside this range the expansion table's fixed early start (10 kyr) leaves the history it
+        // can describe (h0 = 1e-300 made its integration fail); measured values are near 70
+        check("h0", h0Kms, h0Kms >= 1e-3 && h0Kms < 1e6, "must be from 0.001 to 1e6 km/s/Mpc");
         check("omega_m", omegaM, omegaM >= 0 && omegaM < 1e6, "must be >= 0");
         check("omega_r", omegaR, omegaR >= 0 && omegaR < 1e6, "must be >= 0");
         check("omega_k", omegaK, Math.abs(omegaK) < 1e6, "must be a finite number of modest size");

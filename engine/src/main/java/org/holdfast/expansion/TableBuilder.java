@@ -203,12 +203,22 @@ final class TableBuilder {
         return 1.0 / (logSlopeOfH(l) * h0 * Math.sqrt(c.e2(l)));
     }
 
-    /** t - t_BB at a tiny a, from radiation (or matter) domination. */
+    /** t - t_BB at a tiny a, from radiation and matter (dark energy and curvature negligible there). */
     private double leadingTau(double a) {
-        if (c.omegaR() > 0) {
-            return a * a / (2 * h0 * Math.sqrt(c.omegaR()));
+        double r = c.omegaR();
+        double m = c.omegaM();
+        if (!(m > 0)) {
+            return a * a / (2 * h0 * Math.sqrt(r));
         }
-        return 2.0 / 3.0 * Math.pow(a, 1.5) / (h0 * Math.sqrt(c.omegaM()));
+        // The integral of da / (a H) from 0 with H^2 = H0^2 (Or a^-4 + Om a^-3), worked out here
+        // (common practice): t = 2/(3 H0 Om^2) [(x - 2 Or) sqrt(x + Or) + 2 Or^1.5], x = Om a, written
+        // as (s - sr)^2 (s + 2 sr) with s = sqrt(x + Or), sr = sqrt(Or), s - sr = x / (s + sr), which
+        // has no cancellation for any Or >= 0 (the radiation-only form overflowed for omega_r = 1e-308).
+        double x = m * a;
+        double s = Math.sqrt(x + r);
+        double sr = Math.sqrt(r);
+        double d = a / (s + sr); // (s - sr) / Om
+        return 2.0 / (3 * h0) * d * d * (s + 2 * sr);
     }
 
     private static EventHandler stopAt(double yStop) {

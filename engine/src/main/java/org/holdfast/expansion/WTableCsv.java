@@ -1,7 +1,5 @@
 package org.holdfast.expansion;
 
-import java.io.IOException;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
@@ -22,12 +20,7 @@ public final class WTableCsv {
 
     /** Reads and checks the table. */
     public static TabulatedW read(Path file) {
-        List<String> lines;
-        try {
-            lines = Files.readAllLines(file);
-        } catch (IOException e) {
-            throw new ScenarioException(file.toString(), null, "cannot read w(a) table: " + e.getMessage());
-        }
+        List<String> lines = org.holdfast.scenario.InputText.read(file, "w(a) table").lines().toList();
         List<double[]> rows = new ArrayList<>();
         boolean header = false;
         int headerLine = 0;

@@ -51,8 +51,17 @@ public final class RunFolder {
      * {@code NAME-run-2}, ...). Nothing is created yet.
      */
     public static Path choose(Path out, Path scenarioFile) {
+        return choose(out, scenarioFile, false);
+    }
+
+    /**
+     * As {@link #choose(Path, Path)}; with {@code restart}, an {@code out} that holds a run killed
+     * before its end ({@link #isInterrupted}) is accepted too, for the caller to
+     * {@link #clearInterrupted clear} once everything else is checked.
+     */
+    public static Path choose(Path out, Path scenarioFile, boolean restart) {
         if (out != null) {
-            if (Files.exists(out) && !(Files.isDirectory(out) && isEmpty(out))) {
+            if (Files.exists(out) && !(Files.isDirectory(out) && (isEmpty(out) || restart && isInterrupted(out)))) {
                 throw new ScenarioException("--out", null, out + " already exists and is not an empty folder;"
                         + " choose another --out or remove it");
             }
@@ -138,6 +147,62 @@ public final class RunFolder {
             throw new UncheckedIOException("cannot create the run folder " + dir, e);
         }
         return new RunFolder(dir);
+    }
+
+    /** What a run folder holds besides its summary (and their temporary names, with .part). */
+    private static final java.util.Set<String> RUN_FILES = java.util.Set.of(SCENARIO_COPY, RESOLVED, TrackWriter.FILE,
+            SnapshotWriter.FOLDER, RunPlots.DISTANCES, RunPlots.ENERGY, RunPlots.HUBBLE);
+
+    /**
+     * Whether {@code dir} holds a run that was killed before its end (kill -9, a power cut): no
+     * summary, and nothing but a run folder's own files, whole or temporary. Such a folder is
+     * started over by the next run into it ({@link #clearInterrupted}).
+     */
+    public static boolean isInterrupted(Path dir) {
+        if (!Files.isDirectory(dir) || Files.exists(dir.resolve(SUMMARY)) || !Files.exists(dir.resolve(SCENARIO_COPY))) {
+            return false;
+        }
+        try (var s = Files.list(dir)) {
+            for (Path p : s.toList()) {
+                String name = p.getFileName().toString();
+                if (!RUN_FILES.contains(name.replaceFirst("\\.part$", "")) && !name.equals(SUMMARY + ".part")) {
+                    return false;
+                }
+            }
+        } catch (IOException e) {
+            return false;
+        }
+        Path snaps = dir.resolve(SnapshotWriter.FOLDER);
+        if (Files.isDirectory(snaps)) {
+            try (var s = Files.list(snaps)) {
+                return s.allMatch(p -> p.getFileName().toString().matches("state_[0-9]{6}\\.h5(\\.part)?"));
+            } catch (IOException e) {
+                return false;
+            }
+        }
+        return true;
+    }
+
+    /**
+     * Empties a folder {@link #isInterrupted} accepted, so the new run does not mix with the old
+     * one's snapshots or leave its temporary files; does nothing to any other folder.
+     *
+     * @return whether there was an interrupted run to clear
+     */
+    public static boolean clearInterrupted(Path dir) {
+        if (!isInterrupted(dir)) {
+            return false;
+        }
+        try (var s = Files.walk(dir)) {
+            for (Path p : s.sorted(java.util.Comparator.reverseOrder()).toList()) {
+                if (!p.equals(dir)) {
+                    Files.deleteIfExists(p);
+                }
+            }
+        } catch (IOException e) {
+            throw new UncheckedIOException("cannot clear the interrupted run in " + dir, e);
+        }
+        return true;
     }
 
     /** Writes a JSON file inside the folder, atomically. */

@@ -57,7 +57,7 @@ public final class RunWriter {
 
     /**
      * Runs the simulation (built from the scenario) with the fate tracker, the folder's writers
-     * and then {@code watchers}, and writes the summary and pictures. A cancelled run is written
+     * and then {@code watchers}, and writes the pictures and, last, the summary. A cancelled run is written
      * like any other, with its stop reason.
      */
     public FateRun.Outcome run(Simulation sim, List<RunObserver> watchers) {
@@ -84,11 +84,12 @@ public final class RunWriter {
             tracks.close();
             why.close();
         }
-        folder.writeJson(RunFolder.SUMMARY, summary(scenario, version, r, limit));
         if (!jvmShuttingDown()) {
             // the pictures need AWT, which refuses to start once the JVM is quitting (Ctrl+C)
             RunPlots.write(folder.dir(), recorder, r.events(), scenario.name());
         }
+        // the summary comes last: a folder with one holds a whole run, pictures included
+        folder.writeJson(RunFolder.SUMMARY, summary(scenario, version, r, limit));
         return r;
     }
 
@@ -145,7 +146,8 @@ public final class RunWriter {
         // when a member's speed relative to the centre of mass first passed 0.1 c (null: never)
         m.put("newtonian_limit_passed_gyr", Provenance.finiteOrNull(limit.passedGyr()));
         m.put("newtonian_limit_member", limit.member());
-        m.put("newtonian_limit_kms", Units.NEWTONIAN_LIMIT_FRACTION_OF_C * Units.C_KMS);
+        // the member's speed then, km/s (just above 0.1 c); null, like the two above, when no member passed it
+        m.put("newtonian_limit_kms", Provenance.finiteOrNull(limit.speedKpcPerGyr() * Units.KPC_PER_GYR_TO_KMS));
         List<Map<String, Object>> members = new ArrayList<>();
         for (MemberFate f : r.members()) {
             Map<String, Object> e = new LinkedHashMap<>();

@@ -25,6 +25,8 @@ import io.jhdf.api.WritableGroup;
  * <pre>
  * /                      attributes: t_gyr, scale_factor, index, scenario, holdfast_version,
  *                        frame ("centre of mass"), length_unit "kpc", velocity_unit "km/s"
+ *                        (strings are fixed-length UTF-8, the only kind jhdf 0.10 writes: h5py
+ *                        returns them as bytes, b"kpc".decode() gives the text)
  * /galaxies/name         string[N]
  * /galaxies/mass_msun    float64[N]
  * /galaxies/position_kpc float64[3][N]
@@ -92,6 +94,8 @@ public final class SnapshotWriter implements RunObserver {
     }
 
     private void fill(WritableHdfFile file, RunView run) {
+        // jhdf marks every file it writes with a root attribute of its own; a snapshot holds only ours
+        file.removeAttribute("_jHDF");
         file.putAttribute("t_gyr", run.tGyr());
         file.putAttribute("scale_factor", run.scaleFactor());
         file.putAttribute("index", index);

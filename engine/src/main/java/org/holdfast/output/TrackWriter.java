@@ -1,7 +1,7 @@
 package org.holdfast.output;
 
-import java.io.BufferedWriter;
 import java.io.IOException;
+import java.io.OutputStream;
 import java.io.UncheckedIOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
@@ -15,8 +15,8 @@ import org.holdfast.run.StopReason;
 import org.holdfast.units.Units;
 
 /**
- * Writes {@code tracks.csv}: one row per galaxy per snapshot, flushed after every snapshot so
- * a killed run keeps what it had. Columns:
+ * Writes {@code tracks.csv}: one row per galaxy per snapshot, each snapshot's rows written at
+ * once so a killed run keeps what it had, in whole snapshots. Columns:
  * {@code t_gyr,a,name,x_kpc,y_kpc,z_kpc,vx_kms,vy_kms,vz_kms,mass_msun,stripped_msun}: mass_msun is
  * the bound mass (after tidal stripping and mergers), stripped_msun what stripping took so far.
  */
@@ -31,6 +31,8 @@ public final class TrackWriter implements RunObserver, AutoCloseable {
     };
 
     private final Path file;
+    private final StringBuilder block = new StringBuilder();
+    private OutputStream out;
     private CSVPrinter csv;
 
     public TrackWriter(Path runDir) {
@@ -40,13 +42,18 @@ public final class TrackWriter implements RunObserver, AutoCloseable {
     @Override
     public void init(RunView run) {
         try {
-            BufferedWriter w = Files.newBufferedWriter(file, StandardCharsets.UTF_8);
-            csv = new CSVPrinter(w, CSVFormat.DEFAULT.builder().setHeader(COLUMNS).setRecordSeparator('\n').get());
+            out = Files.newOutputStream(file);
+            csv = new CSVPrinter(block, CSVFormat.DEFAULT.builder().setHeader(COLUMNS).setRecordSeparator('\n').get());
+            writeBlock();
         } catch (IOException e) {
             throw new UncheckedIOException(e);
         }
     }
 
+    /**
+     * Writes one snapshot's rows with a single unbuffered write, so that a run killed at any
+     * moment leaves tracks.csv ending after a whole snapshot's rows (one per galaxy then).
+     */
     @Override
     public void atSnapshot(RunView run) {
         double k = Units.KPC_PER_GYR_TO_KMS;
@@ -57,10 +64,17 @@ public final class TrackWriter implements RunObserver, AutoCloseable {
                         run.bodyVx()[i] * k, run.bodyVy()[i] * k, run.bodyVz()[i] * k, run.bodyMass()[i],
                         run.strippedMassMsun(run.bodyName(i)));
             }
-            csv.flush();
+            writeBlock();
         } catch (IOException e) {
             throw new UncheckedIOException(e);
         }
+    }
+
+    private void writeBlock() throws IOException {
+        csv.flush();
+        out.write(block.toString().getBytes(StandardCharsets.UTF_8));
+        out.flush();
+        block.setLength(0);
     }
 
     @Override
@@ -70,12 +84,13 @@ public final class TrackWriter implements RunObserver, AutoCloseable {
 
     @Override
     public void close() {
-        if (csv != null) {
+        if (out != null) {
             try {
-                csv.close();
+                out.close();
             } catch (IOException e) {
                 throw new UncheckedIOException(e);
             } finally {
+                out = null;
                 csv = null;
             }
         }

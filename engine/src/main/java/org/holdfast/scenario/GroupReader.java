@@ -76,6 +76,7 @@ public final class GroupReader {
                 spec = galaxy(g, null, null);
             }
             checkSpeed(g, spec, warnings);
+            checkScale(g, spec);
             Node earlier = byName.put(spec.name(), g);
             if (earlier != null) {
                 throw g.error("name", "duplicate galaxy name '" + spec.name() + "' (first used at line "
@@ -117,6 +118,31 @@ public final class GroupReader {
             warnings.add(String.format(Locale.ROOT, "%s: %s: a speed of %.4g km/s is %.2f c, above %.1f c, where"
                     + " the Newtonian model is doubtful", g.where(key), g.keyPath(key), speed, speed / Units.C_KMS,
                     Units.NEWTONIAN_LIMIT_FRACTION_OF_C));
+        }
+    }
+
+    /** Farthest a member may be placed, kpc: 100 Gpc, far beyond the Hubble radius (4 Gpc for H0 = 70). */
+    static final double MAX_DISTANCE_KPC = 1e8;
+
+    /** Heaviest member, Msun: 1e20, 10^5 times a rich cluster of galaxies (about 1e15 Msun; from memory). */
+    static final double MAX_MASS_MSUN = 1e20;
+
+    /**
+     * A member far beyond the Hubble radius lies outside this model, the Newtonian limit around a
+     * point (valid for r much less than c/H; common practice), and numbers as large as 1e308
+     * overflow the forces: such places and masses are refused.
+     */
+    static void checkScale(Node g, GalaxySpec spec) {
+        double[] p = spec.positionKpc();
+        double d = Math.sqrt(p[0] * p[0] + p[1] * p[1] + p[2] * p[2]);
+        String key = g.hasInFile("observed") ? "observed" : "position_kpc";
+        if (!(d < MAX_DISTANCE_KPC)) {
+            throw g.error(key, String.format(Locale.ROOT, "%.4g kpc from the origin is beyond %.0e kpc, far outside"
+                    + " the Hubble radius, where this Newtonian model does not hold", d, MAX_DISTANCE_KPC));
+        }
+        if (!(spec.massMsun() < MAX_MASS_MSUN)) {
+            throw g.error("mass_msun", String.format(Locale.ROOT, "%.4g Msun is more than %.0e Msun, far heavier than"
+                    + " any group of galaxies", spec.massMsun(), MAX_MASS_MSUN));
         }
     }
 

@@ -15,6 +15,15 @@ public final class RunReader {
     /** Default snapshot interval, Myr. */
     public static final double DEFAULT_SNAPSHOT_MYR = 100.0;
 
+    /** The most steps of a fixed-step run. */
+    public static final long MAX_FIXED_STEPS = 1_000_000_000L;
+
+    /** The smallest adaptive-step accuracy parameter. */
+    public static final double MIN_ACCURACY = 1e-5;
+
+    /** The most snapshots one run writes. */
+    public static final long MAX_SNAPSHOTS = 100_000;
+
     private RunReader() {
     }
 
@@ -45,7 +54,9 @@ public final class RunReader {
         }
         double step = hasStep ? run.positive("step_myr") : Double.NaN;
         double accuracy = hasStep ? Double.NaN : run.positive("accuracy", DEFAULT_ACCURACY);
+        checkStepping(run, start, until, step, accuracy);
         double snap = run.positive("snapshot_every_myr", DEFAULT_SNAPSHOT_MYR);
+        checkSnapshotCount(run, start, until, snap, untilOverrideGyr);
         boolean de = run.bool("dark_energy_force", true);
         boolean matter = run.bool("background_matter", false);
         long seed = run.integer("seed", Long.MIN_VALUE, Long.MAX_VALUE, 1L);
@@ -64,6 +75,58 @@ public final class RunReader {
         }
         return new RunSettings(start, until, Scheme.of(schemeName), accuracy, step, snap, de, matter, seed,
                 friction, log, mergeWithin);
+    }
+
+    /**
+     * Refuses step settings that would never finish or resolve nothing: more than
+     * {@link #MAX_FIXED_STEPS} fixed steps, or an accuracy parameter outside [{@link #MIN_ACCURACY}, 1]
+     * (the adaptive step is this fraction of the shortest dynamical time: above 1 no orbit is
+     * resolved; far below 1e-5 leapfrog's truncation error, which falls as its square, is below
+     * the rounding accumulated over its millions of steps and each step buys nothing; common practice).
+     */
+    private static void checkStepping(Node run, double start, double until, double stepMyr, double accuracy) {
+        if (!Double.isNaN(stepMyr)) {
+            double steps = Math.abs(until - start) * 1e3 / stepMyr;
+            if (steps > MAX_FIXED_STEPS) {
+                throw run.error("step_myr", String.format(java.util.Locale.ROOT,
+                        "%s Myr over a run of %s Gyr is %.3g steps; at most %.0e (a step of at least %s Myr)",
+                        Node.fmt(stepMyr), Node.fmt(Math.abs(until - start)), steps, (double) MAX_FIXED_STEPS,
+                        Node.fmt(Math.abs(until - start) * 1e3 / MAX_FIXED_STEPS)));
+            }
+        } else if (accuracy < MIN_ACCURACY || accuracy > 1) {
+            throw run.error("accuracy", "must be from " + Node.fmt(MIN_ACCURACY) + " to 1 (got " + Node.fmt(accuracy)
+                    + "): the step is this fraction of the shortest dynamical time");
+        }
+    }
+
+    /**
+     * Refuses a run that would write more than {@link #MAX_SNAPSHOTS} snapshots (a mistyped
+     * interval, 1e-9 Myr, would otherwise fill a disk before anyone stops it), before anything is
+     * written.
+     */
+    private static void checkSnapshotCount(Node run, double start, double until, double snapMyr,
+            double untilOverrideGyr) {
+        double span = Math.abs(until - start);
+        double count = span * 1e3 / snapMyr;
+        if (count > MAX_SNAPSHOTS) {
+            String key = "snapshot_every_myr";
+            String msg = String.format(java.util.Locale.ROOT,
+                    "%s Myr over a run of %s Gyr asks for %.3g snapshots; at most %,d are written"
+                    + " (an interval of at least %s Myr)", Node.fmt(snapMyr), Node.fmt(span),
+                    count, MAX_SNAPSHOTS, Node.fmt(span * 1e3 / MAX_SNAPSHOTS));
+            boolean keyOverridden = run.where(key).startsWith("--");
+            if (!(span < 1e12)) {
+                msg = "a run of " + Node.fmt(span) + " Gyr is far longer than any expansion history holdfast can follow";
+                keyOverridden = false;
+            }
+            if (!keyOverridden && !Double.isNaN(untilOverrideGyr)) {
+                throw new ScenarioException("--until", null, msg);
+            }
+            if (!(span < 1e12)) {
+                throw run.error("until_gyr", msg);
+            }
+            throw run.error(key, msg);
+        }
     }
 
     /**

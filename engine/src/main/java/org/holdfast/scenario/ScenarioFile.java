@@ -1,6 +1,5 @@
 package org.holdfast.scenario;
 
-import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 
@@ -31,18 +30,22 @@ public final class ScenarioFile {
         if (!Files.isRegularFile(file)) {
             throw new ScenarioException(file.toString(), null, "no such scenario file");
         }
-        String text;
-        try {
-            text = Files.readString(file);
-        } catch (IOException e) {
-            throw new ScenarioException(file.toString(), null, "cannot read: " + e.getMessage());
-        }
+        String text = InputText.read(file, "scenario file");
         return parse(file, text, overrides, numbers);
     }
 
     /** Parses TOML text as if it came from {@code file}. */
     public static Node parse(Path file, String text, Overrides overrides, NumberReader numbers) {
-        TomlParseResult result = Toml.parse(text);
+        if (text.startsWith("\uFEFF")) {
+            text = text.substring(1);
+        }
+        InputText.checkToml(file, text);
+        TomlParseResult result;
+        try {
+            result = Toml.parse(text);
+        } catch (StackOverflowError e) {
+            throw new ScenarioException(file.toString(), null, "TOML nested too deeply to read");
+        }
         if (result.hasErrors()) {
             TomlParseError e = result.errors().get(0);
             throw new ScenarioException(file + ":" + e.position().line(), null, "TOML syntax: " + e.getMessage());

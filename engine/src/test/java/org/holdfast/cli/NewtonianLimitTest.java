@@ -36,6 +36,8 @@ class NewtonianLimitTest {
         JsonNode s = new ObjectMapper().readTree(out.resolve("summary.json").toFile());
         double passed = s.get("newtonian_limit_passed_gyr").asDouble();
         assertEquals("Wrenna", s.get("newtonian_limit_member").asText());
+        double kms = s.get("newtonian_limit_kms").asDouble();
+        assertTrue(kms > 0.1 * 299792.458 && kms < 0.2 * 299792.458, "speed then: " + kms);
         assertTrue(passed > 0 && passed < s.get("end_gyr").asDouble(), "passed at " + passed);
         assertTrue(r.out().contains("Note: Wrenna moved faster than 0.1 c relative to the centre of mass from t = "),
                 r.out());
@@ -91,6 +93,7 @@ class NewtonianLimitTest {
         assertTrue(s.has("newtonian_limit_passed_gyr"));
         assertTrue(s.get("newtonian_limit_passed_gyr").isNull());
         assertTrue(s.get("newtonian_limit_member").isNull());
+        assertTrue(s.get("newtonian_limit_kms").isNull(), "never passed: " + s.get("newtonian_limit_kms"));
         assertFalse(r.out().contains("Note:"), r.out());
     }
 }

@@ -75,6 +75,7 @@ final class FilmManifest {
         }
     }
 
+
     private static Map<String, Object> describe(Path input, FilmSpec film, String cameraOption) {
         Map<String, Object> m = new LinkedHashMap<>();
         m.put("input", input.toAbsolutePath().normalize().toString());

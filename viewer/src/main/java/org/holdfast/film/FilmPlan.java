@@ -94,8 +94,7 @@ public final class FilmPlan {
         checkWithinRun(spec, run, film);
         if (spec.frameCount() > MAX_FRAMES) {
             String where = o.seconds() != null ? "--seconds" : o.fps() != null ? "--fps" : film.where("length_s");
-            throw new ScenarioException(where, null, spec.frameCount() + " frames is more than the "
-                    + MAX_FRAMES + " a film may have");
+            throw new ScenarioException(where, null, Math.round(spec.lengthS() * spec.frameRate()) + " frames is more than the " + MAX_FRAMES + " a film may have");
         }
         long needBytes = BYTES_PER_PIXEL * spec.widthPx() * (long) spec.heightPx();
         if (needBytes > 0.8 * Runtime.getRuntime().maxMemory()) {

@@ -77,7 +77,9 @@ public record FilmSpec(double lengthS, int frameRate, String view, int widthPx, 
 
     /** Number of frames of a film {@code lengthS} long at {@code frameRate}: at least one. */
     static int frameCount(double lengthS, int frameRate) {
-        return Math.max(1, (int) Math.round(lengthS * frameRate));
+        // saturates rather than wrapping round: a film too long for an int is refused by its frame count
+        long n = Math.round(lengthS * frameRate);
+        return (int) Math.max(1, Math.min(Integer.MAX_VALUE, n));
     }
 
     /** Film second shown by frame {@code index} (1-based, as in the frame file names). */

@@ -11,6 +11,7 @@ import java.util.Locale;
 import java.util.Optional;
 import java.util.concurrent.Callable;
 
+import org.holdfast.output.OutputPaths;
 import org.holdfast.output.RunFolder;
 import org.holdfast.render.CameraPose;
 import org.holdfast.render.SceneFrame;
@@ -183,6 +184,13 @@ public final class RenderCommand implements Callable<Integer> {
         if (video != null && !lowerName(video).endsWith(".mp4")) {
             throw new ScenarioException("--video", null, "expected a file name ending in .mp4 (got " + video + ")");
         }
+        // a path through an ordinary file, or into a folder that cannot be written, is refused before drawing
+        if (out != null) {
+            OutputPaths.check(out, still != null ? OutputPaths.Kind.FILE : OutputPaths.Kind.FOLDER, "--out");
+        }
+        if (video != null) {
+            OutputPaths.check(video, OutputPaths.Kind.FILE, "--video");
+        }
     }
 
     private int renderStill(PrintWriter o, RunArchive run, FilmSpec film) throws IOException {
@@ -209,10 +217,54 @@ public final class RenderCommand implements Callable<Integer> {
         Path dir = out != null ? out : Path.of(stem() + "-" + film.view() + "-frames");
         int n = film.frameCount();
         int[] span = frameRange == null ? new int[] {1, n} : range(frameRange, n);
+        boolean folderWasThere = Files.exists(dir);
+        boolean manifestWasThere = Files.exists(dir.resolve(FilmManifest.FILE));
         FilmManifest.claim(dir, input, film, camera);
         FrameFiles files = new FrameFiles(dir);
         List<CueSheet.Note> notes = ladderNotes(film, run);
         CueSheet.write(dir, film, run, notes);
+        List<Path> drawnNow = new ArrayList<>();
+        try {
+            drawFrames(o, run, film, dir, files, span, notes, drawnNow);
+        } catch (ScenarioException e) {
+            // bad input found while drawing (a damaged snapshot): take back what this command wrote
+            undo(dir, drawnNow, !manifestWasThere, !folderWasThere);
+            throw e;
+        }
+        if (video == null) {
+            return 0;
+        }
+        for (int i = 1; i <= n; i++) {
+            if (!files.isComplete(i)) {
+                // a worker of a split film: the others are still drawing
+                say(o, "frame " + i + " is not drawn yet, so no video was made; run this command again with"
+                        + " --video once every --frame-range is done");
+                return 0;
+            }
+        }
+        return encode(dir, film);
+    }
+
+    private static void undo(Path dir, List<Path> drawn, boolean manifest, boolean folder) {
+        try {
+            for (Path p : drawn) {
+                Files.deleteIfExists(p);
+            }
+            if (manifest) {
+                Files.deleteIfExists(dir.resolve(CueSheet.FILE));
+                Files.deleteIfExists(dir.resolve(FilmManifest.FILE));
+            }
+            if (folder) {
+                Files.deleteIfExists(dir);
+            }
+        } catch (IOException e) {
+            // not empty (someone else's files): leave the rest
+        }
+    }
+
+    private void drawFrames(PrintWriter o, RunArchive run, FilmSpec film, Path dir, FrameFiles files, int[] span,
+            List<CueSheet.Note> notes, List<Path> drawnNow) {
+        int n = film.frameCount();
         say(o, String.format(Locale.ROOT, "rendering %s (%dx%d %s, %d per second, %s to %s Gyr) into %s",
                 span[0] == 1 && span[1] == n ? n + " frames" : "frames " + span[0] + " to " + span[1] + " of " + n,
                 film.widthPx(), film.heightPx(), film.view(), film.frameRate(), FilmPlan.shown(film.clock().simGyr(0)),
@@ -236,33 +288,21 @@ public final class RenderCommand implements Callable<Integer> {
                 setNotes(frame, notes);
                 FilmLook look = film.look();
                 if (!look.deep() && !look.overlayLayer()) {
-                    files.write(i, r.render(frame, pose));
+                    drawnNow.add(files.write(i, r.render(frame, pose)));
                 } else {
                     BufferedImage picture = look.deep() ? r.renderDeep(frame, pose, !look.overlayLayer())
                             : r.renderPicture(frame, pose);
                     if (look.overlayLayer()) {
                         // the layer first: a frame file present means both are complete
-                        files.writeLayer(i, r.overlayLayer(frame, pose));
+                        drawnNow.add(files.writeLayer(i, r.overlayLayer(frame, pose)));
                     }
-                    files.write(i, picture);
+                    drawnNow.add(files.write(i, picture));
                 }
                 progress.frameDone(true);
             }
         }
         say(o, String.format(Locale.ROOT, "%d frames drawn, %d already there, in %.1f s", progress.drawn(),
                 count - progress.drawn(), progress.seconds()));
-        if (video == null) {
-            return 0;
-        }
-        for (int i = 1; i <= n; i++) {
-            if (!files.isComplete(i)) {
-                // a worker of a split film: the others are still drawing
-                say(o, "frame " + i + " is not drawn yet, so no video was made; run this command again with"
-                        + " --video once every --frame-range is done");
-                return 0;
-            }
-        }
-        return encode(dir, film);
     }
 
     /** The rip ladder's rungs passed by the frame's time, as notes under its events. */

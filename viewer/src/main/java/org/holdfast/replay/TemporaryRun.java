@@ -8,6 +8,8 @@ import java.nio.file.Path;
 import java.util.Comparator;
 import java.util.List;
 import java.util.Locale;
+import java.util.concurrent.CountDownLatch;
+import java.util.concurrent.TimeUnit;
 import java.util.stream.Stream;
 
 import org.holdfast.cli.RunProgress;
@@ -31,14 +33,17 @@ import org.holdfast.uncertain.UncertainNumbers;
 public final class TemporaryRun implements AutoCloseable {
 
     private final Path dir;
+    private final Thread onExit;
 
-    private TemporaryRun(Path dir) {
+    private TemporaryRun(Path dir, Thread onExit) {
         this.dir = dir;
+        this.onExit = onExit;
     }
 
     /**
      * Evolves {@code scenario} with the given {@code --set} overrides, as {@code holdfast evolve}
-     * would, into a temporary folder.
+     * would, into a temporary folder. A program told to quit (Ctrl+C, SIGTERM) while the
+     * folder exists stops the run and removes the folder on its way out.
      *
      * @param progress where the evolve's progress and a closing line go, or null for none
      * @throws ScenarioException naming the file, line and key when the scenario is bad
@@ -54,6 +59,17 @@ public final class TemporaryRun implements AutoCloseable {
             throw new UncheckedIOException("cannot make a temporary run folder", e);
         }
         Path dir = parent.resolve("run");
+        CountDownLatch stopped = new CountDownLatch(1);
+        Thread onExit = new Thread(() -> {
+            sim.cancel();
+            try {
+                stopped.await(30, TimeUnit.SECONDS);
+            } catch (InterruptedException e) {
+                Thread.currentThread().interrupt();
+            }
+            delete(parent);
+        }, "holdfast-temporary-run-exit");
+        Runtime.getRuntime().addShutdownHook(onExit);
         try {
             List<RunObserver> watchers = progress == null ? List.of()
                     : List.of(new RunProgress(progress, RunProgress.onTerminal(), s.run().startGyr(),
@@ -65,12 +81,15 @@ public final class TemporaryRun implements AutoCloseable {
                 progress.flush();
             }
         } catch (RuntimeException e) {
+            stopped.countDown();
+            removeHook(onExit);
             delete(parent);
             throw e;
         } finally {
+            stopped.countDown();
             sim.close();
         }
-        return new TemporaryRun(dir);
+        return new TemporaryRun(dir, onExit);
     }
 
     /** The run folder. */
@@ -80,7 +99,16 @@ public final class TemporaryRun implements AutoCloseable {
 
     @Override
     public void close() {
+        removeHook(onExit);
         delete(dir.getParent());
+    }
+
+    private static void removeHook(Thread hook) {
+        try {
+            Runtime.getRuntime().removeShutdownHook(hook);
+        } catch (IllegalStateException e) {
+            // shutting down already: the hook removes the folder
+        }
     }
 
     /** Removes a folder and everything in it; a folder that will not go is left behind. */

@@ -30,6 +30,6 @@ public final class HoldfastFull {
     }
 
     public static void main(String[] args) {
-        System.exit(commandLine().execute(args));
+        System.exit(Holdfast.execute(commandLine(), args));
     }
 }
