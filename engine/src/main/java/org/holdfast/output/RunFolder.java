@@ -151,7 +151,7 @@ public final class RunFolder {
 
     /** What a run folder holds besides its summary (and their temporary names, with .part). */
     private static final java.util.Set<String> RUN_FILES = java.util.Set.of(SCENARIO_COPY, RESOLVED, TrackWriter.FILE,
-            SnapshotWriter.FOLDER, RunPlots.DISTANCES, RunPlots.ENERGY, RunPlots.HUBBLE);
+            FateWriter.FILE, SnapshotWriter.FOLDER, RunPlots.DISTANCES, RunPlots.ENERGY, RunPlots.HUBBLE);
 
     /**
      * Whether {@code dir} holds a run that was killed before its end (kill -9, a power cut): no

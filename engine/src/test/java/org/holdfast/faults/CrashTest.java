@@ -93,7 +93,6 @@ class CrashTest {
     }
 
     @Test
-    @org.junit.jupiter.api.Disabled("sweep-merge is made resumable on another branch; enable this once merged")
     void aKilledSweepMergeCanBeRunAgain() throws Exception {
         Random rnd = new Random(SEED + 2);
         Path one = tmp.resolve("shard-1");
