@@ -49,6 +49,9 @@ import picocli.CommandLine.Spec;
         })
 public final class TimingCommand implements Callable<Integer> {
 
+    /** The central expansion reaches this far ahead, for drawing the orbit's future. */
+    static final double PLOT_HORIZON_GYR = 60;
+
     @Parameters(index = "0", arity = "0..1", paramLabel = "FILE.toml",
             description = "A weighing file ([pair], optional [cosmology] and [independent_mass]).")
     Path file;
@@ -157,7 +160,7 @@ public final class TimingCommand implements Callable<Integer> {
         }
         ExpansionTable table = null;
         if (cosmology.any() || ageGyr == null) {
-            table = CosmologyOptions.solve(cosmology.cosmology(), 1);
+            table = CosmologyOptions.solve(cosmology.cosmology(), PLOT_HORIZON_GYR);
         }
         double age = ageGyr == null ? table.ageGyr() : ageGyr;
         if (!(age > 0) || Double.isInfinite(age)) {
@@ -191,7 +194,7 @@ public final class TimingCommand implements Callable<Integer> {
         ExpansionTable table = null;
         if (central.cosmology() != null) {
             try {
-                table = central.cosmology().solve(1);
+                table = central.cosmology().solve(PLOT_HORIZON_GYR);
             } catch (InvalidCosmologyException e) {
                 throw new ScenarioException(file.toString(), "cosmology", e.getMessage());
             }
@@ -262,13 +265,13 @@ public final class TimingCommand implements Callable<Integer> {
             throw new ScenarioException("--independent-mass-msun", null, "the bound on dark energy needs a cosmology");
         }
         ExpansionTable h = in.table;
-        for (PairMotion p : in.pairs) {
-            if (-p.ageGyr() < h.earliestGyr() - TimingSolver.START_SLACK_GYR) {
-                throw new ScenarioException("--independent-mass-msun", null, String.format(Locale.ROOT,
-                        "the bound needs ages within the cosmology's %.4f Gyr (a draw has %.4f)", h.ageGyr(), p.ageGyr()));
-            }
+        List<PairMotion> within = in.pairs.stream()
+                .filter(p -> -p.ageGyr() >= h.earliestGyr() - TimingSolver.START_SLACK_GYR).toList();
+        if (within.isEmpty()) {
+            throw new ScenarioException("--independent-mass-msun", null, String.format(Locale.ROOT,
+                    "the bound needs ages within the cosmology's %.4f Gyr", h.ageGyr()));
         }
-        List<PairMotion> use = in.pairs.size() > 400 ? in.pairs.subList(0, 400) : in.pairs;
+        List<PairMotion> use = within.size() > 400 ? within.subList(0, 400) : within;
         return DarkEnergyBound.of(use, t -> Background.DARK_ENERGY.coefficient(h, t), c.independentMassMsun(),
                 c.independentSigmaMsun(), boundMax, nThreads);
     }

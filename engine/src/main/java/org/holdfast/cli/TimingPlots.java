@@ -68,7 +68,7 @@ final class TimingPlots {
 
     /** The relative orbit in its plane, today's position on the +x axis, from the Big Bang to a Kepler period ahead. */
     static void orbits(PairMotion p, ExpansionTable table, Map<Background, TimingSolver.Weighing> found, Path file) {
-        XYChart c = Charts.lines("Relative orbit of the pair", "x (kpc)", "y (kpc)", 760, 640);
+        XYChart c = Charts.lines("Relative orbit of the pair", "x (kpc)", "y (kpc)", 940, 640);
         for (Map.Entry<Background, TimingSolver.Weighing> e : found.entrySet()) {
             Background b = e.getKey();
             PairOrbit orbit = TimingSolver.orbit(p, e.getValue().massMsun(), TimingReport.field(b, table));
@@ -92,7 +92,30 @@ final class TimingPlots {
             Charts.line(c, b.label(), x, y, b.ordinal());
         }
         Charts.points(c, "today", new double[] {p.separationKpc()}, new double[] {0}, 5, 8);
+        equalScales(c);
         Charts.savePng(c, file);
+    }
+
+    /** The same kpc per pixel on both axes (roughly: the plot area is about square). */
+    private static void equalScales(XYChart c) {
+        double xl = Double.POSITIVE_INFINITY;
+        double xh = Double.NEGATIVE_INFINITY;
+        double yl = Double.POSITIVE_INFINITY;
+        double yh = Double.NEGATIVE_INFINITY;
+        for (var s : c.getSeriesMap().values()) {
+            for (double v : s.getXData()) {
+                xl = Math.min(xl, v);
+                xh = Math.max(xh, v);
+            }
+            for (double v : s.getYData()) {
+                yl = Math.min(yl, v);
+                yh = Math.max(yh, v);
+            }
+        }
+        double half = 0.55 * Math.max(xh - xl, yh - yl);
+        double xm = 0.5 * (xl + xh);
+        double ym = 0.5 * (yl + yh);
+        c.getStyler().setXAxisMin(xm - half).setXAxisMax(xm + half).setYAxisMin(ym - half).setYAxisMax(ym + half);
     }
 
     /** The relative likelihood of the strength of dark energy. */
