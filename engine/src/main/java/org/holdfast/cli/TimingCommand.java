@@ -7,6 +7,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import java.util.concurrent.Callable;
+import java.util.function.DoubleUnaryOperator;
 
 import org.holdfast.expansion.ExpansionTable;
 import org.holdfast.expansion.InvalidCosmologyException;
@@ -52,6 +53,9 @@ public final class TimingCommand implements Callable<Integer> {
     /** The central expansion reaches this far ahead, for drawing the orbit's future. */
     static final double PLOT_HORIZON_GYR = 60;
 
+    /** How many values of w are solved for its bound. */
+    private static final int W_NODES = 29;
+
     @Parameters(index = "0", arity = "0..1", paramLabel = "FILE.toml",
             description = "A weighing file ([pair], optional [cosmology] and [independent_mass]).")
     Path file;
@@ -94,6 +98,13 @@ public final class TimingCommand implements Callable<Integer> {
     @Option(names = "--bound-max", paramLabel = "X", description = "Top of the flat prior on Lambda / Lambda_cosmology (default 12).")
     double boundMax = 12;
 
+    @Option(names = "--bound-on", paramLabel = "lambda|w",
+            description = "Bound the strength of the cosmological constant (default) or a constant w.")
+    String boundOn = "lambda";
+
+    @Option(names = "--w-range", paramLabel = "LO:HI", description = "The flat prior on w for --bound-on w (default -2.5:-0.4).")
+    String wRange = "-2.5:-0.4";
+
     @Option(names = "--json", description = "Print one JSON object instead of text.")
     boolean json;
 
@@ -113,7 +124,7 @@ public final class TimingCommand implements Callable<Integer> {
             throw new ScenarioException("--samples", null, "must be >= 0 (got " + samples + ")");
         }
         Inputs in = file != null ? fromFile(nThreads) : fromOptions();
-        TimingReport report = TimingReport.compute(in.central, in.table, in.draws, bound(in, nThreads));
+        TimingReport report = TimingReport.compute(in.central, in.table, in.draws, bound(in, nThreads), boundOn);
         if (out != null) {
             TimingReport.checkOut(out);
         }
@@ -272,7 +283,54 @@ public final class TimingCommand implements Callable<Integer> {
                     "the bound needs ages within the cosmology's %.4f Gyr", h.ageGyr()));
         }
         List<PairMotion> use = within.size() > 400 ? within.subList(0, 400) : within;
+        if (boundOn.equals("w")) {
+            return wBound(use, h, c, nThreads);
+        }
+        if (!boundOn.equals("lambda")) {
+            throw new ScenarioException("--bound-on", null, "expected lambda or w, got '" + boundOn + "'");
+        }
         return DarkEnergyBound.of(use, t -> Background.DARK_ENERGY.coefficient(h, t), c.independentMassMsun(),
                 c.independentSigmaMsun(), boundMax, nThreads);
     }
+
+    /**
+     * The likelihood of a constant w, each value its own expansion; an age given with the pair is
+     * held (values of w whose universe is younger than it are excluded), the cosmology's own age
+     * follows w.
+     */
+    private DarkEnergyBound.Result wBound(List<PairMotion> pairs, ExpansionTable h, WeighingInput c, int nThreads) {
+        String[] parts = wRange.split(":");
+        double lo;
+        double hi;
+        try {
+            lo = Double.parseDouble(parts[0]);
+            hi = Double.parseDouble(parts[parts.length - 1]);
+        } catch (NumberFormatException e) {
+            throw new ScenarioException("--w-range", null, "expected LO:HI, got '" + wRange + "'");
+        }
+        if (parts.length != 2 || !(hi > lo) || !Double.isFinite(lo) || !Double.isFinite(hi)) {
+            throw new ScenarioException("--w-range", null, "expected LO:HI with LO < HI, got '" + wRange + "'");
+        }
+        int n = W_NODES;
+        double[] nodes = new double[n];
+        double[] ages = new double[n];
+        DoubleUnaryOperator[] fields = new DoubleUnaryOperator[n];
+        org.holdfast.expansion.Cosmology base = h.cosmology();
+        for (int j = 0; j < n; j++) {
+            nodes[j] = lo + (hi - lo) * j / (n - 1);
+            try {
+                ExpansionTable t = new org.holdfast.expansion.Cosmology(base.h0Kms(), base.omegaM(), base.omegaR(),
+                        base.omegaK(), nodes[j] == -1 ? new org.holdfast.expansion.CosmologicalConstant()
+                                : new org.holdfast.expansion.ConstantW(nodes[j])).solve(1);
+                fields[j] = x -> Background.DARK_ENERGY.coefficient(t, x);
+                ages[j] = t.ageGyr();
+            } catch (InvalidCosmologyException e) {
+                fields[j] = null;
+                ages[j] = 0;
+            }
+        }
+        return DarkEnergyBound.over(pairs, nodes, j -> fields[j], ages, Double.isNaN(c.ageGyr()), c.independentMassMsun(),
+                c.independentSigmaMsun(), nThreads);
+    }
+
 }

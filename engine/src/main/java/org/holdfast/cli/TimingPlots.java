@@ -119,11 +119,13 @@ final class TimingPlots {
     }
 
     /** The relative likelihood of the strength of dark energy. */
-    static void bound(DarkEnergyBound.Result b, Path file) {
-        XYChart c = Charts.lines("Dark energy against the independent mass", "Lambda / Lambda of the cosmology",
-                "relative likelihood", 900, 560);
+    static void bound(DarkEnergyBound.Result b, String parameter, Path file) {
+        XYChart c = Charts.lines("Dark energy against the independent mass", parameter, "relative likelihood", 900, 560);
         Charts.line(c, "likelihood", b.ratio(), b.likelihood(), 0);
         Charts.guide(c, "95% upper bound", new double[] {b.upper95(), b.upper95()}, new double[] {0, 1});
+        if (parameter.startsWith("w")) {
+            Charts.guide(c, "95% lower bound", new double[] {b.lower95(), b.lower95()}, new double[] {0, 1});
+        }
         Charts.savePng(c, file);
     }
 

@@ -41,6 +41,7 @@ final class TimingReport {
     private final DarkEnergyBound.Result bound;
     private final WeighingInput input;
     private final KeplerTiming.Orbit kepler;
+    private String boundOn = "lambda";
 
     private TimingReport(WeighingInput input, PairMotion pair, ExpansionTable table, MassDraws.Draw[] draws,
             DarkEnergyBound.Result bound) {
@@ -53,10 +54,11 @@ final class TimingReport {
     }
 
     static TimingReport compute(WeighingInput in, ExpansionTable table, MassDraws.Draw[] draws,
-            DarkEnergyBound.Result bound) {
+            DarkEnergyBound.Result bound, String boundOn) {
         double age = Double.isNaN(in.ageGyr()) ? table.ageGyr() : in.ageGyr();
         PairMotion p = new PairMotion(in.separationKpc(), in.radialKms(), in.tangentialKms(), age);
         TimingReport r = new TimingReport(in, p, table, draws, bound);
+        r.boundOn = boundOn;
         for (Background b : Background.values()) {
             if (b.needsHistory() && table == null) {
                 r.refused.put(b, "no cosmology given");
@@ -111,7 +113,11 @@ final class TimingReport {
                         s.missing() > 0 ? "  (" + s.missing() + " draws without a solution)" : "");
             }
         }
-        if (bound != null) {
+        if (bound != null && boundOn.equals("w")) {
+            w.printf(Locale.ROOT, "Dark energy against an independent mass of %s +- %s Msun: %.3g < w < %.3g (one-sided"
+                    + " 95%% bounds), most likely %.3g, median %.3g%n", m(input.independentMassMsun()),
+                    m(input.independentSigmaMsun()), bound.lower95(), bound.upper95(), bound.best(), bound.median());
+        } else if (bound != null) {
             w.printf(Locale.ROOT, "Dark energy against an independent mass of %s +- %s Msun: Lambda / Lambda_cosmology"
                     + " < %.3g (95%%), most likely %.3g, median %.3g%n", m(input.independentMassMsun()),
                     m(input.independentSigmaMsun()), bound.upper95(), bound.best(), bound.median());
@@ -180,9 +186,11 @@ final class TimingReport {
             Map<String, Object> o = ExpansionCommand.map();
             o.put("independent_mass_msun", input.independentMassMsun());
             o.put("independent_sigma_msun", input.independentSigmaMsun());
-            o.put("lambda_ratio_upper95", bound.upper95());
-            o.put("lambda_ratio_best", bound.best());
-            o.put("lambda_ratio_median", bound.median());
+            o.put("parameter", boundOn.equals("w") ? "w" : "lambda_ratio");
+            o.put("upper95", bound.upper95());
+            o.put("lower95", bound.lower95());
+            o.put("best", bound.best());
+            o.put("median", bound.median());
             o.put("lambda_reference_per_m2", lambdaPerM2());
             j.put("dark_energy_bound", o);
         }
@@ -214,12 +222,13 @@ final class TimingReport {
         }
         TimingPlots.orbits(pair, table, central, dir.resolve("orbit.png"));
         if (bound != null) {
-            StringBuilder b = new StringBuilder("lambda_ratio,likelihood\n");
+            StringBuilder b = new StringBuilder(boundOn.equals("w") ? "w,likelihood\n" : "lambda_ratio,likelihood\n");
             for (int k = 0; k < bound.ratio().length; k++) {
                 b.append(String.format(Locale.ROOT, "%.6g,%.6g%n", bound.ratio()[k], bound.likelihood()[k]));
             }
             writeText(dir.resolve("bound.csv"), b.toString());
-            TimingPlots.bound(bound, dir.resolve("bound.png"));
+            TimingPlots.bound(bound, boundOn.equals("w") ? "w (constant)" : "Lambda / Lambda of the cosmology",
+                    dir.resolve("bound.png"));
         }
     }
 

@@ -25,11 +25,12 @@ public final class DarkEnergyBound {
      * @param likelihood relative likelihood (maximum 1)
      * @param best the most likely x
      * @param upper95 the 95% upper bound on x
+     * @param lower95 the 95% lower bound on x
      * @param median the median of x
      * @param timingMassAtNodes mean timing mass of the draws at each node (Msun), for plots
      * @param nodes the node values of x
      */
-    public record Result(double[] ratio, double[] likelihood, double best, double upper95, double median,
+    public record Result(double[] ratio, double[] likelihood, double best, double upper95, double lower95, double median,
             double[] nodes, double[] timingMassAtNodes) {
     }
 
@@ -37,6 +38,8 @@ public final class DarkEnergyBound {
     }
 
     /**
+     * The bound on the scale x = Lambda / Lambda_ref of the dark-energy force, from 0 to maxRatio.
+     *
      * @param pairs the draws of the pair (or the central pair alone)
      * @param reference the dark-energy force of the reference cosmology, K(t) in 1/Gyr^2
      * @param massMsun the independent mass
@@ -49,11 +52,34 @@ public final class DarkEnergyBound {
         for (int j = 0; j <= NODES; j++) {
             nodes[j] = maxRatio * j / NODES;
         }
+        double[] noLimit = new double[nodes.length];
+        java.util.Arrays.fill(noLimit, Double.POSITIVE_INFINITY);
+        return over(pairs, nodes, j -> {
+            double f = nodes[j];
+            return t -> f * reference.applyAsDouble(t);
+        }, noLimit, false, massMsun, sigmaMsun, threads);
+    }
+
+    /**
+     * The likelihood of a parameter tabulated at {@code nodes} (ascending), whose dark-energy
+     * force at node j is {@code fieldAt.apply(j)} (null: that value is impossible, e.g. a
+     * universe younger than the pair). A draw without a solution at a node, or older than
+     * {@code ageLimitGyr[j]} (the age of that node's universe), adds nothing to its likelihood there;
+     * with {@code ownAge} every pair takes that age instead (its age was the cosmology's own).
+     */
+    public static Result over(List<PairMotion> pairs, double[] nodes, java.util.function.IntFunction<DoubleUnaryOperator> fieldAt,
+            double[] ageLimitGyr, boolean ownAge, double massMsun, double sigmaMsun, int threads) {
+        DoubleUnaryOperator[] fields = new DoubleUnaryOperator[nodes.length];
+        for (int j = 0; j < nodes.length; j++) {
+            fields[j] = fieldAt.apply(j);
+        }
+        double maxRatio = nodes[nodes.length - 1];
+        double minRatio = nodes[0];
         double[][] m = new double[pairs.size()][];
         ForkJoinPool pool = new ForkJoinPool(Math.max(1, threads));
         try {
             pool.submit(() -> IntStream.range(0, pairs.size()).parallel().forEach(i -> m[i] = masses(pairs.get(i),
-                    reference, nodes))).get();
+                    fields, ageLimitGyr, ownAge))).get();
         } catch (InterruptedException e) {
             Thread.currentThread().interrupt();
             throw new IllegalStateException("interrupted", e);
@@ -66,18 +92,16 @@ public final class DarkEnergyBound {
         double[] like = new double[FINE];
         double top = 0;
         for (int k = 0; k < FINE; k++) {
-            x[k] = maxRatio * k / (FINE - 1);
+            x[k] = minRatio + (maxRatio - minRatio) * k / (FINE - 1);
             double sum = 0;
-            int used = 0;
             for (double[] row : m) {
                 double mk = interpolate(nodes, row, x[k]);
                 if (Double.isFinite(mk)) {
                     double z = (mk - massMsun) / sigmaMsun;
                     sum += Math.exp(-0.5 * z * z);
-                    used++;
                 }
             }
-            like[k] = used == 0 ? 0 : sum / used;
+            like[k] = sum / m.length;
             top = Math.max(top, like[k]);
         }
         int best = 0;
@@ -99,15 +123,19 @@ public final class DarkEnergyBound {
             }
             meanMass[j] = c == 0 ? Double.NaN : s / c;
         }
-        return new Result(x, like, x[best], quantile(x, like, 0.95), quantile(x, like, 0.5), nodes, meanMass);
+        return new Result(x, like, x[best], quantile(x, like, 0.95), quantile(x, like, 0.05), quantile(x, like, 0.5), nodes,
+                meanMass);
     }
 
-    private static double[] masses(PairMotion p, DoubleUnaryOperator reference, double[] nodes) {
-        double[] out = new double[nodes.length];
-        for (int j = 0; j < nodes.length; j++) {
-            double f = nodes[j];
+    private static double[] masses(PairMotion given, DoubleUnaryOperator[] fields, double[] ageLimitGyr, boolean ownAge) {
+        double[] out = new double[fields.length];
+        for (int j = 0; j < fields.length; j++) {
             try {
-                out[j] = TimingSolver.solve(p, Background.DARK_ENERGY, t -> f * reference.applyAsDouble(t)).massMsun();
+                PairMotion p = ownAge && ageLimitGyr[j] > 0 ? new PairMotion(given.separationKpc(), given.radialKms(),
+                        given.tangentialKms(), ageLimitGyr[j]) : given;
+                boolean tooOld = p.ageGyr() > ageLimitGyr[j] + TimingSolver.START_SLACK_GYR;
+                out[j] = fields[j] == null || tooOld ? Double.NaN
+                        : TimingSolver.solve(p, Background.DARK_ENERGY, fields[j]).massMsun();
             } catch (IllegalArgumentException e) {
                 out[j] = Double.NaN;
             }
@@ -116,7 +144,10 @@ public final class DarkEnergyBound {
     }
 
     static double interpolate(double[] xs, double[] ys, double x) {
-        int j = Math.min(xs.length - 2, (int) Math.floor((x - xs[0]) / (xs[1] - xs[0])));
+        int j = 0;
+        while (j < xs.length - 2 && x > xs[j + 1]) {
+            j++;
+        }
         double u = (x - xs[j]) / (xs[j + 1] - xs[j]);
         return ys[j] + u * (ys[j + 1] - ys[j]);
     }
