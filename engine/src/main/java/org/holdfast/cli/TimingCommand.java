@@ -46,7 +46,7 @@ import picocli.CommandLine.Spec;
             "",
             "Examples:",
             "  holdfast timing --separation-kpc 784 --radial-velocity-kms -130 --h0 70 --omega-m 0.3 --json",
-            "  holdfast timing scenarios/weighing-brisk-pair.toml --samples 200 --seed 1 --out brisk-weighing"
+            "  holdfast timing scenarios/weighing-brisk-pair.toml --samples 20 --seed 1 --out brisk-weighing"
         })
 public final class TimingCommand implements Callable<Integer> {
 
@@ -55,6 +55,9 @@ public final class TimingCommand implements Callable<Integer> {
 
     /** How many values of w are solved for its bound. */
     private static final int W_NODES = 29;
+
+    /** The bound uses the first this many draws (each costs a weighing per value tried). */
+    static final int BOUND_DRAWS = 100;
 
     @Parameters(index = "0", arity = "0..1", paramLabel = "FILE.toml",
             description = "A weighing file ([pair], optional [cosmology] and [independent_mass]).")
@@ -282,7 +285,7 @@ public final class TimingCommand implements Callable<Integer> {
             throw new ScenarioException("--independent-mass-msun", null, String.format(Locale.ROOT,
                     "the bound needs ages within the cosmology's %.4f Gyr", h.ageGyr()));
         }
-        List<PairMotion> use = within.size() > 400 ? within.subList(0, 400) : within;
+        List<PairMotion> use = within.size() > BOUND_DRAWS ? within.subList(0, BOUND_DRAWS) : within;
         if (boundOn.equals("w")) {
             return wBound(use, h, c, nThreads);
         }

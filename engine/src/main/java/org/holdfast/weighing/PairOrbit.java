@@ -32,6 +32,8 @@ public final class PairOrbit {
         /** Separation and radial velocity (kpc/Gyr) at the end of the integration. */
         public double endKpc;
         public double endVr;
+        /** r'' there, kpc/Gyr^2. */
+        public double endAcceleration;
         /** The largest separation met (turnaround), kpc, and when, Gyr from today. */
         public double maxKpc;
         public double maxGyr;
@@ -106,6 +108,7 @@ public final class PairOrbit {
         ode.integrate(equations(), 0, y, stopGyr, y);
         out.endKpc = y[0];
         out.endVr = y[1];
+        out.endAcceleration = -gm / (y[0] * y[0]) + l * l / (y[0] * y[0] * y[0]) + k.applyAsDouble(stopGyr) * y[0];
         return out;
     }
 

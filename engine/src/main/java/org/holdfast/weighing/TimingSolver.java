@@ -75,20 +75,18 @@ public final class TimingSolver {
     public static Weighing solve(PairMotion p, Background b, DoubleUnaryOperator field) {
         KeplerTiming.Orbit guess = KeplerTiming.solve(p);
         double center = guess != null ? Math.log(guess.massMsun()) : Math.log(1e12);
-        double lo = Math.max(Math.log(1e4), center - 1.5);
-        double hi = Math.min(Math.log(1e18), center + 1.5);
-        double flo = mismatch(p, Math.exp(lo), field);
-        double fhi = mismatch(p, Math.exp(hi), field);
-        if (flo > 0 || fhi < 0) {
-            lo = Math.log(1e4);
-            hi = Math.log(1e18);
-        }
+        BrentSolver brent = new BrentSolver(1e-12, 1e-10);
         double lnMass;
         try {
-            lnMass = new BrentSolver(1e-12, 1e-10).solve(400, u -> mismatch(p, Math.exp(u), field), lo, hi);
-        } catch (NoBracketingException e) {
-            throw new IllegalArgumentException("no mass between 1e4 and 1e18 Msun brings this pair from a pericentre"
-                    + " at the Big Bang to today's separation and velocity");
+            // the backgrounds change the Kepler mass by tens of per cent: try near it first
+            lnMass = brent.solve(200, u -> mismatch(p, Math.exp(u), field), center - 0.4, center + 0.4);
+        } catch (NoBracketingException near) {
+            try {
+                lnMass = brent.solve(400, u -> mismatch(p, Math.exp(u), field), Math.log(1e4), Math.log(1e18));
+            } catch (NoBracketingException e) {
+                throw new IllegalArgumentException("no mass between 1e4 and 1e18 Msun brings this pair from a pericentre"
+                        + " at the Big Bang to today's separation and velocity");
+            }
         }
         double mass = Math.exp(lnMass);
         PairOrbit.Past past = orbit(p, mass, field).back(-p.ageGyr() * (1 + 1e-9));
@@ -111,10 +109,15 @@ public final class TimingSolver {
         if (!Double.isNaN(past.pericentreGyr)) {
             return (past.pericentreGyr + p.ageGyr()) / p.ageGyr();
         }
-        // none by the Big Bang: how far from a pericentre it still is there (both go to zero as
-        // the root is approached from below: r for a radial fall, v_r for one with L > 0)
-        double vr = Math.abs(past.endVr) * p.ageGyr() / p.separationKpc();
-        return -Math.min(vr, past.endKpc / p.separationKpc()) - (past.bounced ? 1 : 0);
+        // none by the Big Bang: roughly how much earlier it would come, over the age (so that the
+        // mismatch is smooth through the root): near a pericentre v_r / r'', near a radial
+        // collapse (3/2) r / v_r (r ~ t^(2/3)); approaching or bounced there, simply negative
+        if (past.bounced || !(past.endVr > 0)) {
+            return -1 - past.endKpc / p.separationKpc();
+        }
+        double toCollapse = 1.5 * past.endKpc / past.endVr;
+        double toPericentre = past.endAcceleration > 0 ? past.endVr / past.endAcceleration : Double.POSITIVE_INFINITY;
+        return -Math.min(1, Math.min(toCollapse, toPericentre) / p.ageGyr());
     }
 
     private static Weighing elements(PairMotion p, Background b, double mass, PairOrbit.Past past) {
