@@ -82,8 +82,16 @@ public final class PairOrbit {
 
     private FirstOrderIntegrator integrator(double spanGyr) {
         double vScale = Math.max(Math.abs(vr0), Math.max(l / r0, r0 / spanGyr));
-        return new DormandPrince853Integrator(1e-20 * spanGyr, spanGyr,
-                new double[] {1e-13 * r0, 1e-13 * vScale, 1e-13}, new double[] {RTOL, RTOL, RTOL});
+        return bounded(new DormandPrince853Integrator(1e-20 * spanGyr, spanGyr,
+                new double[] {1e-13 * r0, 1e-13 * vScale, 1e-13}, new double[] {RTOL, RTOL, RTOL}));
+    }
+
+    /** An integration that needs more than this many force evaluations is given up. */
+    static final int MAX_EVALUATIONS = 300_000;
+
+    private static FirstOrderIntegrator bounded(DormandPrince853Integrator ode) {
+        ode.setMaxEvaluations(MAX_EVALUATIONS);
+        return ode;
     }
 
     /** Integrates back from today to stopGyr (negative) or the first pericentre before it. */
@@ -99,8 +107,10 @@ public final class PairOrbit {
         out.maxKpc = r0;
         out.maxGyr = 0;
         FirstOrderIntegrator ode = integrator(Math.abs(stopGyr));
-        ode.addEventHandler(new Apsis(out), 0.02 * Math.abs(stopGyr), 1e-12 * Math.abs(stopGyr), 200);
-        ode.addEventHandler(new Collapse(out), 0.02 * Math.abs(stopGyr), 1e-13 * Math.abs(stopGyr), 200);
+        // look for apsides at least ten times per dynamical time, so that none is stepped over
+        double check = Math.min(0.02 * Math.abs(stopGyr), 0.1 * Math.sqrt(r0 * r0 * r0 / gm));
+        ode.addEventHandler(new Apsis(out), check, 1e-12 * Math.abs(stopGyr), 200);
+        ode.addEventHandler(new Collapse(out), check, 1e-13 * Math.abs(stopGyr), 200);
         if (steps != null) {
             ode.addStepHandler(steps);
         }

@@ -75,18 +75,34 @@ public final class TimingSolver {
     public static Weighing solve(PairMotion p, Background b, DoubleUnaryOperator field) {
         KeplerTiming.Orbit guess = KeplerTiming.solve(p);
         double center = guess != null ? Math.log(guess.massMsun()) : Math.log(1e12);
-        BrentSolver brent = new BrentSolver(1e-12, 1e-10);
+        // the backgrounds change the Kepler mass by tens of per cent: start near it and widen the
+        // bracket step by step (the mismatch grows with the mass), never jumping to absurd masses
+        double lo = center - 0.4;
+        double hi = center + 0.4;
+        double flo = mismatch(p, Math.exp(lo), field);
+        double fhi = mismatch(p, Math.exp(hi), field);
+        for (double step = 0.8; (flo > 0 || fhi < 0); step *= 2) {
+            if (lo < Math.log(1e4) || hi > Math.log(1e18)) {
+                throw new IllegalArgumentException("no mass between 1e4 and 1e18 Msun brings this pair from a"
+                        + " pericentre at the Big Bang to today's separation and velocity");
+            }
+            if (flo > 0) {
+                hi = lo;
+                fhi = flo;
+                lo -= step;
+                flo = mismatch(p, Math.exp(lo), field);
+            } else {
+                lo = hi;
+                flo = fhi;
+                hi += step;
+                fhi = mismatch(p, Math.exp(hi), field);
+            }
+        }
         double lnMass;
         try {
-            // the backgrounds change the Kepler mass by tens of per cent: try near it first
-            lnMass = brent.solve(200, u -> mismatch(p, Math.exp(u), field), center - 0.4, center + 0.4);
-        } catch (NoBracketingException near) {
-            try {
-                lnMass = brent.solve(400, u -> mismatch(p, Math.exp(u), field), Math.log(1e4), Math.log(1e18));
-            } catch (NoBracketingException e) {
-                throw new IllegalArgumentException("no mass between 1e4 and 1e18 Msun brings this pair from a pericentre"
-                        + " at the Big Bang to today's separation and velocity");
-            }
+            lnMass = new BrentSolver(1e-12, 1e-10).solve(200, u -> mismatch(p, Math.exp(u), field), lo, hi);
+        } catch (NoBracketingException e) {
+            throw new IllegalArgumentException("no mass brackets this pair's timing solution", e);
         }
         double mass = Math.exp(lnMass);
         PairOrbit.Past past = orbit(p, mass, field).back(-p.ageGyr() * (1 + 1e-9));
@@ -105,7 +121,13 @@ public final class TimingSolver {
      * only minimum of r was one that dark energy made).
      */
     static double mismatch(PairMotion p, double massMsun, DoubleUnaryOperator field) {
-        PairOrbit.Past past = orbit(p, massMsun, field).back(-p.ageGyr());
+        PairOrbit.Past past;
+        try {
+            past = orbit(p, massMsun, field).back(-p.ageGyr());
+        } catch (org.apache.commons.math3.exception.MaxCountExceededException e) {
+            // only an orbit of very many revolutions since the Big Bang takes so long: far too much mass
+            return 1;
+        }
         if (!Double.isNaN(past.pericentreGyr)) {
             return (past.pericentreGyr + p.ageGyr()) / p.ageGyr();
         }
