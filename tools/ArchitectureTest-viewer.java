@@ -1,0 +1,53 @@
+package org.holdfast;
+
+import static com.tngtech.archunit.base.DescribedPredicate.not;
+import static com.tngtech.archunit.core.domain.JavaClass.Predicates.resideInAPackage;
+import static com.tngtech.archunit.core.domain.JavaClass.Predicates.resideInAnyPackage;
+import static com.tngtech.archunit.library.Architectures.layeredArchitecture;
+import static com.tngtech.archunit.library.dependencies.SlicesRuleDefinition.slices;
+
+import com.tngtech.archunit.core.importer.ImportOption;
+import com.tngtech.archunit.junit.AnalyzeClasses;
+import com.tngtech.archunit.junit.ArchTag;
+import com.tngtech.archunit.junit.ArchTest;
+import com.tngtech.archunit.lang.ArchRule;
+
+/**
+ * The layers of the whole program (the viewer's classes and the engine's they use), checked on
+ * the compiled classes, tests excluded: no package depends on itself through others, and
+ * dependencies point down only.
+ * <pre>
+ *   commands   cli, viewer (HoldfastFull, ViewCommand, RenderCommand)
+ *   pictures   render, replay, film, window (and their subpackages)
+ *   domain     every other engine package
+ *   base       schema, units, bench (the suite SPI)
+ * </pre>
+ * A new viewer package belongs in PICTURES here; any other new package is domain.
+ */
+@ArchTag("fast")
+@AnalyzeClasses(packages = "org.holdfast", importOptions = ImportOption.DoNotIncludeTests.class)
+class ArchitectureTest {
+
+    static final String[] BASE = {"org.holdfast.schema..", "org.holdfast.units..", "org.holdfast.bench.."};
+    static final String[] PICTURES = {"org.holdfast.render..", "org.holdfast.replay..", "org.holdfast.film..",
+        "org.holdfast.window.."};
+    static final String[] COMMANDS = {"org.holdfast.cli..", "org.holdfast.viewer.."};
+
+    /** Each package is its own slice: window and window.gl may not depend on each other both ways. */
+    @ArchTest
+    static final ArchRule packagesAreFreeOfCycles = slices().matching("org.holdfast.(**)")
+            .should().beFreeOfCycles();
+
+    @ArchTest
+    static final ArchRule layersPointDown = layeredArchitecture()
+            .consideringOnlyDependenciesInLayers()
+            .layer("base").definedBy(BASE)
+            .layer("domain").definedBy(resideInAPackage("org.holdfast..").and(not(resideInAnyPackage(BASE)))
+                    .and(not(resideInAnyPackage(PICTURES))).and(not(resideInAnyPackage(COMMANDS))))
+            .layer("pictures").definedBy(PICTURES)
+            .layer("commands").definedBy(COMMANDS)
+            .whereLayer("commands").mayNotBeAccessedByAnyLayer()
+            .whereLayer("pictures").mayOnlyBeAccessedByLayers("commands")
+            .whereLayer("domain").mayOnlyBeAccessedByLayers("pictures", "commands")
+            .whereLayer("base").mayOnlyBeAccessedByLayers("domain", "pictures", "commands");
+}
