@@ -8,7 +8,6 @@ import static com.tngtech.archunit.library.dependencies.SlicesRuleDefinition.sli
 
 import com.tngtech.archunit.core.importer.ImportOption;
 import com.tngtech.archunit.junit.AnalyzeClasses;
-import com.tngtech.archunit.junit.ArchTag;
 import com.tngtech.archunit.junit.ArchTest;
 import com.tngtech.archunit.lang.ArchRule;
 
@@ -22,8 +21,8 @@ import com.tngtech.archunit.lang.ArchRule;
  * </pre>
  * A new package is domain unless it is added to base or commands here.
  */
-@ArchTag("fast")
-@AnalyzeClasses(packages = "org.holdfast", importOptions = ImportOption.DoNotIncludeTests.class)
+@AnalyzeClasses(packages = "org.holdfast",
+        importOptions = {ImportOption.DoNotIncludeTests.class, ImportOption.DoNotIncludeJars.class})
 class ArchitectureTest {
 
     static final String[] BASE = {"org.holdfast.schema..", "org.holdfast.units..", "org.holdfast.bench.."};
