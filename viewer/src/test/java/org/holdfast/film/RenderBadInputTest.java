@@ -8,10 +8,12 @@ import java.nio.file.Path;
 
 import org.holdfast.replay.DemoRun;
 import org.holdfast.window.ViewRun;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
 /** Bad input to {@code holdfast render}: one line naming the option, exit code 2, nothing written. */
+@Tag("slow")
 class RenderBadInputTest {
 
     @TempDir

@@ -8,11 +8,13 @@ import java.nio.file.Path;
 
 import org.holdfast.output.SnapshotWriter;
 import org.holdfast.render.SceneFrame;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 
 import io.jhdf.HdfFile;
 
 /** Replaying the cut-down demo run: exact at snapshots, accurate between them. */
+@Tag("slow")
 class ReplaySceneTest {
 
     private static double[][] saved(Path run, int i) {
