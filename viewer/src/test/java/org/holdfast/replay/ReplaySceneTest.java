@@ -145,37 +145,6 @@ class ReplaySceneTest {
         assertTrue(worstTrail < worstPolygon / 4, "trail " + worstTrail + " deg vs polygon " + worstPolygon);
     }
 
-    /**
-     * Once its arrays have grown and its two snapshots are loaded, a scene fills frame after
-     * frame without allocating: trails included. A round of 100 frames is measured a few times,
-     * because the JIT may rebuild an optimised-away object once while it recompiles; an
-     * allocation per frame would show in every round.
-     */
-    @Test
-    void framesWithinOneSnapshotIntervalAllocateNothing() {
-        RunArchive run = RunArchive.open(DemoRun.folder());
-        ReplayScene scene = new ReplayScene(run);
-        double t0 = run.timeOf(5);
-        double h = run.timeOf(6) - t0;
-        for (int i = 0; i < 2000; i++) {
-            scene.at(t0 + h * (i % 100) / 100.0);
-        }
-        com.sun.management.ThreadMXBean threads =
-                (com.sun.management.ThreadMXBean) java.lang.management.ManagementFactory.getThreadMXBean();
-        long id = Thread.currentThread().getId();
-        long[] rounds = new long[5];
-        long least = Long.MAX_VALUE;
-        for (int k = 0; k < rounds.length && least > 0; k++) {
-            long before = threads.getThreadAllocatedBytes(id);
-            for (int i = 0; i < 100; i++) {
-                scene.at(t0 + h * i / 100.0);
-            }
-            rounds[k] = threads.getThreadAllocatedBytes(id) - before;
-            least = Math.min(least, rounds[k]);
-        }
-        assertEquals(0, least, "bytes allocated by rounds of 100 frames: " + java.util.Arrays.toString(rounds));
-    }
-
     /** Angle in degrees between the directions a to b and b to c of trail g. */
     private static double turn(SceneFrame f, int g, int a, int b, int c) {
         double[] u = {f.trailX(g, b) - f.trailX(g, a), f.trailY(g, b) - f.trailY(g, a), f.trailZ(g, b) - f.trailZ(g, a)};
