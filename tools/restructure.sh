@@ -27,7 +27,8 @@
 #  7. viewer    window.{Camera,CameraSpec} -> render; replay.RunFrameSource -> window;
 #               window.input.Controls -> window; window.ViewCommand -> viewer
 #               (the view command, beside HoldfastFull; film.RenderCommand stays with films).
-#  8. tests     an ArchitectureTest in each module (ArchUnit, test scope) and its pom entries.
+#  8. duplicate CosmologicalConstant removed: new ConstantW(-1) everywhere (same numbers exactly).
+#  9. tests     an ArchitectureTest in each module (ArchUnit, test scope) and its pom entries.
 # A type's test (XTest) moves with it. Every fully qualified name in sources, resources (the
 # bench service lists), poms and the README is rewritten; same-package users get imports.
 set -euo pipefail
@@ -96,6 +97,21 @@ edit "$SCHEME" 's/(\n)(\s*\/\*\* The name used in scenario files\. \*\/)/$1\n   
 edit engine/src/main/java/org/holdfast/bench/package-info.java \
     's/\A\/\*\*.*?\*\//\/** The interface every `holdfast bench` suite implements (found through ServiceLoader); the command is cli.BenchCommand. *\//s' \
     "bench package note" 'cli\.BenchCommand'
+
+# A duplicate: CosmologicalConstant is ConstantW(-1), which computes the same numbers exactly.
+CC=engine/src/main/java/org/holdfast/expansion/CosmologicalConstant.java
+if [[ -f "$CC" ]]; then
+    grep -q 'w == -1.0 ? 0.0' engine/src/main/java/org/holdfast/expansion/ConstantW.java \
+        || { echo "restructure: ConstantW has no exact w = -1 case; keeping CosmologicalConstant" >&2; exit 1; }
+    for f in $(grep -rl 'CosmologicalConstant' --include=*.java engine viewer | grep -v "$CC" || true); do
+        perl -pi -e 's/new CosmologicalConstant\(\)/new ConstantW(-1)/g;
+            s/^import org\.holdfast\.expansion\.CosmologicalConstant;/import org.holdfast.expansion.ConstantW;/' "$f"
+    done
+    left=$(grep -rlw 'CosmologicalConstant' --include=*.java engine viewer | grep -v "$CC" || true)
+    [[ -z "$left" ]] || { echo "restructure: CosmologicalConstant still named in: $left" >&2; exit 1; }
+    git rm -q "$CC"
+    echo "  CosmologicalConstant -> ConstantW(-1)"
+fi
 
 echo "restructure: architecture tests"
 put_test() { # put_test MODULE
