@@ -3,7 +3,9 @@
 #
 # Commands, one per line on standard input (blank lines and # comments skipped):
 #   move OLD.FQN NEW.FQN      move (and maybe rename) a top-level type, with its XTest if any
+#   maybe-move OLD.FQN NEW.FQN    the same where OLD exists (a type some branches add)
 #   nested OUTER.FQN NAME NEW.FQN   lift a nested type OUTER.NAME out into its own file NEW.FQN
+#   lift-method OWNER.FQN NAME NEW.FQN   copy a static method down a layer, OWNER's delegates
 #   resource OLD/PATH NEW/PATH      git mv a resource (paths relative to the repository root)
 #   package-info PKG TEXT           write PKG's package-info.java if it has none (TEXT: one line)
 # Every step checks its anchors and dies with a message naming what it could not find; a step
@@ -236,6 +238,59 @@ sub nested {
     }
 }
 
+# Copies the static method NAME of OWNER (javadoc included) into NEWFQN (created with OWNER's
+# java.* imports), leaves OWNER's method delegating to it, and points the callers in NEWFQN's
+# package at it. Skipped where OWNER has no such method (a branch that never added it).
+sub lift_method {
+    my ($owner, $name, $new) = @_;
+    my ($op, $os) = split_fqn($owner);
+    my ($np, $ns) = split_fqn($new);
+    my ($of) = grep { -f } map { "$_/" . path_of($owner) } @ROOTS;
+    my $c = $of ? slurp($of) : '';
+    if (!$of || $c !~ /\n([ \t]*)((?:\/\*\*(?:(?!\*\/).|\n)*?\*\/\s*\n[ \t]*)?public\s+static\s+[\w.<>\[\]]+\s+\Q$name\E\s*\([^)]*\)[^{;]*\{)/) {
+        print "  (absent) $owner.$name\n";
+        return;
+    }
+    my $indent = $1;
+    my $start = $-[2];
+    my $open = $+[2];
+    my ($depth, $i) = (1, $open);
+    while ($depth > 0) {
+        die "restructure: unbalanced braces in $owner.$name\n" if $i >= length $c;
+        my $ch = substr($c, $i, 1);
+        if ($ch eq '"' || $ch eq "'") { my $q = $ch; $i++; while (substr($c, $i, 1) ne $q) { $i++ if substr($c, $i, 1) eq '\\'; $i++; } }
+        elsif ($ch eq '{') { $depth++; } elsif ($ch eq '}') { $depth--; }
+        $i++;
+    }
+    my $method = substr($c, $start, $i - $start);
+    (my $sig = $method) =~ s/^(?:\/\*\*(?:(?!\*\/).|\n)*?\*\/\s*)?//;
+    $sig =~ s/\{.*//s;
+    my ($params) = $sig =~ /\Q$name\E\s*\(([^)]*)\)/;
+    my $args = join ', ', map { (split /\s+/, $_)[-1] } grep { /\S/ } split /,/, $params;
+    my $nf = (grep { index($of, "$_/") == 0 } @ROOTS)[0] . '/' . path_of($new);
+    die "restructure: $new exists already\n" if -f $nf;
+    my @imports = grep { my ($n) = /\.(\w+)\s*;/; $method =~ /\b\Q$n\E\b/ } $c =~ /^(import\s+java[x]?\.[\w.]+\s*;)\s*$/mg;
+    my $body = $method;
+    $body =~ s/^\Q$indent\E/    /mg;
+    $body =~ s/^    // if $body !~ /^    /;
+    spew($nf, "package $np;\n\n" . join("\n", @imports) . "\n\n/** Shared by the layers above: {\@link #$name} (moved here from $os, which still offers it). */\n"
+        . "public final class $ns {\n\n    private $ns() {\n    }\n\n    " . $body . "\n}\n");
+    my $delegate = $sig;
+    $delegate =~ s/\s+$//;
+    $delegate .= " {\n$indent    return $new.$name($args);\n$indent}";
+    substr($c, $start, $i - $start) = "/** Kept for its callers: see {\@link $new#$name}. */\n$indent$delegate";
+    spew($of, $c);
+    sh('git', 'add', $nf, $of);
+    print "  $owner.$name -> $new.$name\n";
+    for my $f (java_files()) {
+        my $t = slurp($f);
+        next unless pkg_of($t) eq $np;
+        my $o = $t;
+        $t =~ s/(?<![\w.])(?:\Q$owner\E|\Q$os\E)\.\Q$name\E\s*\(/$ns.$name(/g;
+        spew($f, $t) if $t ne $o;
+    }
+}
+
 sub resource {
     my ($from, $to) = @_;
     if (!-e $from) { return print "  (already) $to\n" if -e $to; die "restructure: cannot find $from\n"; }
@@ -262,7 +317,12 @@ while (my $line = <STDIN>) {
     next if $line eq '' || $line =~ /^#/;
     my ($cmd, @a) = split /\s+/, $line, 3;
     if ($cmd eq 'move') { move(split /\s+/, $a[0] . ' ' . $a[1]); }
+    elsif ($cmd eq 'maybe-move') {
+        my ($o, $n) = split /\s+/, "$a[0] $a[1]";
+        if (grep { -f "$_/" . path_of($o) } @ROOTS) { move($o, $n); } else { print "  (absent) $o\n"; }
+    }
     elsif ($cmd eq 'nested') { my @b = split /\s+/, "$a[0] $a[1]"; nested(@b); }
+    elsif ($cmd eq 'lift-method') { my @b = split /\s+/, "$a[0] $a[1]"; lift_method(@b); }
     elsif ($cmd eq 'resource') { resource($a[0], $a[1]); }
     elsif ($cmd eq 'package-info') { package_info($a[0], $a[1]); }
     else { die "restructure: unknown command '$cmd'\n"; }

@@ -12,8 +12,10 @@
 # nothing. Undo everything with `git reset --hard && git clean -fd engine viewer tools`.
 #
 # What it does (the plan and the reasons are in tools/DEVELOPERS-after.md):
-#  1. schema    scenario.{Node,NumberReader,Overrides,ScenarioException,ScenarioFile} -> schema:
+#  1. schema    scenario.{Node,NumberReader,Overrides,ScenarioException,ScenarioFile,InputText}:
 #               the bottom layer every domain reader uses (no domain imports).
+#               output.RunFolder.reason(IOException) -> schema.IoFailure.reason, which InputText
+#               uses (RunFolder.reason stays, delegating), where a branch added InputText.
 #  2. console   cli.Version (and its version.properties), cli.RunProgress -> console, so that
 #               sweep and replay no longer import the command line.
 #  3. bench     bench.BenchCommand -> cli (a command like the others); bench keeps the BenchSuite
@@ -54,6 +56,8 @@ move org.holdfast.scenario.NumberReader org.holdfast.schema.NumberReader
 move org.holdfast.scenario.Overrides org.holdfast.schema.Overrides
 move org.holdfast.scenario.Node org.holdfast.schema.Node
 move org.holdfast.scenario.ScenarioFile org.holdfast.schema.ScenarioFile
+maybe-move org.holdfast.scenario.InputText org.holdfast.schema.InputText
+lift-method org.holdfast.output.RunFolder reason org.holdfast.schema.IoFailure
 package-info org.holdfast.schema The grammar of input files, below every domain package: a checked TOML tree (Node) with file:line:key errors, --set overrides and the number reader each value passes through.
 # 2. version and progress out of the command line
 move org.holdfast.cli.Version org.holdfast.console.Version
@@ -104,7 +108,7 @@ if [[ -f "$CC" ]]; then
     grep -q 'w == -1.0 ? 0.0' engine/src/main/java/org/holdfast/expansion/ConstantW.java \
         || { echo "restructure: ConstantW has no exact w = -1 case; keeping CosmologicalConstant" >&2; exit 1; }
     for f in $(grep -rl 'CosmologicalConstant' --include=*.java engine viewer | grep -v "$CC" || true); do
-        perl -pi -e 's/new CosmologicalConstant\(\)/new ConstantW(-1)/g;
+        perl -pi -e 's/new (org\.holdfast\.expansion\.|)CosmologicalConstant\(\)/new ${1}ConstantW(-1)/g;
             s/^import org\.holdfast\.expansion\.CosmologicalConstant;/import org.holdfast.expansion.ConstantW;/' "$f"
     done
     left=$(grep -rlw 'CosmologicalConstant' --include=*.java engine viewer | grep -v "$CC" || true)
