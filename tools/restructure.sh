@@ -31,6 +31,8 @@
 #               (the view command, beside HoldfastFull; film.RenderCommand stays with films).
 #  8. duplicate CosmologicalConstant removed: new ConstantW(-1) everywhere (same numbers exactly).
 #  9. tests     an ArchitectureTest in each module (ArchUnit, test scope) and its pom entries.
+# 10. docs      DEVELOPERS.md: its Layout section replaced by tools/DEVELOPERS-after.md's (layers,
+#               each package's job); moved names updated in the rest.
 # A type's test (XTest) moves with it. Every fully qualified name in sources, resources (the
 # bench service lists), poms and the README is rewritten; same-package users get imports.
 set -euo pipefail
@@ -137,9 +139,24 @@ if ! grep -q '<archunit.version>' pom.xml; then
         || { echo "restructure: pom.xml: no <junit.version> property to put <archunit.version> after" >&2; exit 1; }
     git add pom.xml
 fi
-if [[ -f "$HERE/DEVELOPERS-after.md" ]]; then
-    cp "$HERE/DEVELOPERS-after.md" DEVELOPERS.md && git add DEVELOPERS.md
-    echo "  DEVELOPERS.md <- $HERE/DEVELOPERS-after.md (check the sections the merged branches changed)"
+# DEVELOPERS.md: the Layout section comes from tools/DEVELOPERS-after.md (the layers, each
+# package's job); the rest keeps what the merged branches wrote, with the moved names updated.
+if [[ -f "$HERE/DEVELOPERS-after.md" ]] && ! grep -q '^## Layout: layers without cycles' DEVELOPERS.md; then
+    perl -0pi -e '
+        open my $h, "<", "'"$HERE"'/DEVELOPERS-after.md" or die; local $/; my $after = <$h>;
+        my ($layout) = $after =~ /(^## Layout.*?)(?=^## )/ms or die "no Layout section in DEVELOPERS-after.md\n";
+        s/^## Layout.*?(?=^## )/$layout/ms or die "no ## Layout section in DEVELOPERS.md\n";
+        s/`Node` from `org\.holdfast\.scenario`/`Node` from `org.holdfast.schema`/g;
+        s/a `ScenarioException`/a `schema.ScenarioException`/g;
+        s/`fates\.Binding`/`forces.Binding`/g;
+        s/`window\.Projection`/`render.ProjectionKind`/g;
+        s/(?<![\w.])`Controls`/`window.Controls`/g;
+        s/`cli\.(Version|RunProgress)`/`console.$1`/g;
+        s/RunSettings\.Scheme/integrators.Scheme/g;
+        s/weights \(Yoshida.s fourth order is one\)\./weights (Yoshida\x27s fourth order is one), a constant in `integrators.Scheme` (its scenario name)\nand its case in `Integrator.of`; `Scheme.integrator()` hands it to the run./;
+    ' DEVELOPERS.md || { echo "restructure: DEVELOPERS.md: could not replace its Layout section" >&2; exit 1; }
+    git add DEVELOPERS.md
+    echo "  DEVELOPERS.md: Layout section from $HERE/DEVELOPERS-after.md, moved names updated (see its How to add for the rest)"
 fi
 
 # A member or type that only its old package used is package-private; after the move javac names
