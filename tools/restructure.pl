@@ -268,7 +268,7 @@ sub lift_method {
     my ($params) = $sig =~ /\Q$name\E\s*\(([^)]*)\)/;
     my $args = join ', ', map { (split /\s+/, $_)[-1] } grep { /\S/ } split /,/, $params;
     my $nf = (grep { index($of, "$_/") == 0 } @ROOTS)[0] . '/' . path_of($new);
-    die "restructure: $new exists already\n" if -f $nf;
+    if (-f $nf) { print "  (already) $owner.$name -> $new.$name\n"; return; }
     my @imports = grep { my ($n) = /\.(\w+)\s*;/; $method =~ /\b\Q$n\E\b/ } $c =~ /^(import\s+java[x]?\.[\w.]+\s*;)\s*$/mg;
     my $body = $method;
     $body =~ s/^\Q$indent\E/    /mg;

@@ -33,6 +33,8 @@
 #  9. tests     an ArchitectureTest in each module (ArchUnit, test scope) and its pom entries.
 # 10. docs      DEVELOPERS.md: its Layout section replaced by tools/DEVELOPERS-after.md's (layers,
 #               each package's job); moved names updated in the rest.
+# Then it compiles (mvn -o; MVN_OFFLINE= tools/restructure.sh lets Maven download) and makes
+# public each member javac reports out of reach after a move (tools/open-access.pl), and stages all.
 # A type's test (XTest) moves with it. Every fully qualified name in sources, resources (the
 # bench service lists), poms and the README is rewritten; same-package users get imports.
 set -euo pipefail
