@@ -10,6 +10,7 @@ import java.util.List;
 import java.util.concurrent.TimeUnit;
 import java.util.stream.Stream;
 
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -21,6 +22,7 @@ import com.fasterxml.jackson.databind.ObjectMapper;
  * sends) stops at its next step and still writes its summary, with "cancelled" as the reason,
  * and leaves no half-written file behind.
  */
+@Tag("slow")
 class EvolveStopTest {
 
     @TempDir

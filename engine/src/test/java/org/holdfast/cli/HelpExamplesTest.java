@@ -9,6 +9,7 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -20,6 +21,7 @@ import picocli.CommandLine;
  * makes its first run only (as shard 1 of very many, after its check of every varied value);
  * the benchmark example is parsed only.
  */
+@Tag("slow")
 class HelpExamplesTest {
 
     /** The repository root, where the examples' relative paths start. */

@@ -13,6 +13,7 @@ import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 
 import org.holdfast.units.Units;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -20,6 +21,7 @@ import org.junit.jupiter.api.io.TempDir;
  * Near a big rip the Newtonian model lets a member torn away pass the speed of light; evolve
  * records when a member first passed 0.1 c and says so.
  */
+@Tag("slow")
 class NewtonianLimitTest {
 
     static final Path PAIR = Path.of("..", "scenarios", "tethered-pair.toml");

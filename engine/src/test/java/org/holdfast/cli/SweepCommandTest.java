@@ -20,6 +20,7 @@ import org.holdfast.sweep.SweepFiles;
 import org.holdfast.sweep.ToyRunFunction;
 import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.BeforeEach;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -28,6 +29,7 @@ import org.junit.jupiter.api.io.TempDir;
  * workers and shards, resumption and bad input. The physics checks come later with the real
  * engine; here only the machinery is tested.
  */
+@Tag("slow")
 class SweepCommandTest {
 
     @TempDir

@@ -12,6 +12,7 @@ import org.holdfast.sweep.RunFunctions;
 import org.holdfast.sweep.ToyRunFunction;
 import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.BeforeEach;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -19,6 +20,7 @@ import org.junit.jupiter.api.io.TempDir;
  * The threshold command over the toy physics, whose crossings are known in closed form
  * ({@link ToyRunFunction#criticalW}, {@link ToyRunFunction#ripTimeGyr}). Machinery only.
  */
+@Tag("slow")
 class ThresholdCommandTest {
 
     @TempDir

@@ -6,9 +6,11 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 
 /** {@code holdfast timing} end to end. */
+@Tag("slow")
 class TimingCommandTest {
 
     private static final String[] PAIR = {"timing", "--separation-kpc", "784", "--radial-velocity-kms", "-130",

@@ -16,6 +16,8 @@ import org.holdfast.run.RunSettings;
 import org.holdfast.run.RunSettings.Scheme;
 import org.holdfast.run.Simulation;
 import org.holdfast.units.Units;
+
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.ValueSource;
 
@@ -40,6 +42,7 @@ import org.junit.jupiter.params.provider.ValueSource;
  * than the vanishing minimum (plus one analysis interval, P/100) and within 5% of a period before
  * it, and always before the estimate of Caldwell et al.
  */
+@Tag("slow")
 class BigRipBinaryTest {
 
     private static final ExpansionTable PHANTOM = new Cosmology(70, 0.3, 0, 0, new ConstantW(-1.5)).solve(40);

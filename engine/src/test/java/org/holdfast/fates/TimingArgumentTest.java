@@ -8,9 +8,11 @@ import org.holdfast.expansion.Cosmology;
 import org.holdfast.expansion.ExpansionTable;
 import org.holdfast.units.Units;
 import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 
 /** The timing argument solved with the engine, against the radial Kepler solution. */
+@Tag("slow")
 class TimingArgumentTest {
 
     private static TimingArgument pair;

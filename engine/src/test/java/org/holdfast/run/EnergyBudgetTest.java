@@ -13,9 +13,11 @@ import org.holdfast.group.GalaxySpec;
 import org.holdfast.group.GroupSpec;
 import org.holdfast.group.HaloSpec;
 import org.holdfast.run.RunSettings.Scheme;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 
 /** The energy budget of a demo-like group closes. */
+@Tag("slow")
 class EnergyBudgetTest {
 
     /** Three large NFW members and a dozen dwarfs, invented. */

@@ -9,9 +9,11 @@ import org.holdfast.group.FlowSpec;
 import org.holdfast.group.GroupSpec;
 import org.holdfast.run.RunSettings.Scheme;
 import org.holdfast.units.Units;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 
 /** Gravity against a cosmological constant, and tracers on the Hubble flow. */
+@Tag("slow")
 class LambdaDynamicsTest {
 
     private static final FlatLambdaHistory LCDM = FlatLambdaHistory.standard();

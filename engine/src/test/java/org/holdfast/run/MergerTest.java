@@ -14,9 +14,11 @@ import org.holdfast.group.StarsSpec;
 import org.holdfast.halos.Halos;
 import org.holdfast.halos.PlummerHalo;
 import org.holdfast.run.RunSettings.Scheme;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 
 /** Two equal halos that fall together and merge (invented members). */
+@Tag("slow")
 class MergerTest {
 
     private static final HaloSpec PLUMMER = new HaloSpec("plummer", Double.NaN, 10, Double.NaN, Double.NaN);

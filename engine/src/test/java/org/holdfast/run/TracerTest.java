@@ -14,9 +14,11 @@ import org.holdfast.group.HaloSpec;
 import org.holdfast.group.StarsSpec;
 import org.holdfast.run.RunSettings.Scheme;
 import org.holdfast.units.Units;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 
 /** Star and flow tracers: placement, determinism across thread counts, memory estimate. */
+@Tag("slow")
 class TracerTest {
 
     private static GroupSpec withStars(int disk, int sphere, int flow) {

@@ -11,9 +11,11 @@ import org.holdfast.expansion.W0WaDarkEnergy;
 import org.holdfast.group.FlowSpec;
 import org.holdfast.group.GroupSpec;
 import org.holdfast.run.RunSettings.Scheme;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 
 /** The dynamics in a w0–wa universe from the expansion solver. */
+@Tag("slow")
 class W0WaDynamicsTest {
 
     /** w0 = -0.9, wa = -0.3 (w > -1 from a = 2/3 on: no rip), H0 = 70, Omega_m = 0.3, flat, no radiation (Chevallier & Polarski 2001; Linder 2003). */

@@ -10,9 +10,11 @@ import org.holdfast.fates.FateTracker.Verdict;
 import org.holdfast.fates.MemberFate;
 import org.holdfast.fates.Fate;
 import org.holdfast.uncertain.UncertainNumbers;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 
 /** The demo group's fates with dynamical friction: it holds with a cosmological constant, comes apart in a rip. */
+@Tag("slow")
 class DemoFatesTest {
 
     private static FateRun.Outcome run(String... overrides) {

@@ -10,9 +10,11 @@ import org.holdfast.fates.FateRun;
 import org.holdfast.group.GalaxySpec;
 import org.holdfast.run.StopReason;
 import org.holdfast.uncertain.UncertainNumbers;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 
 /** The shipped demo group, as the README runs it, without its tracers (they do not act on the bodies). */
+@Tag("slow")
 class DemoGroupTest {
 
     static final Path DEMO = Path.of("..", "scenarios", "hollin-group.toml");

@@ -10,6 +10,7 @@ import java.util.List;
 
 import org.holdfast.cli.CommandRunner;
 import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -24,6 +25,7 @@ import com.fasterxml.jackson.databind.ObjectMapper;
  * Weinberg 2003, PRL 91, 071301), so the fraction ripped within a fixed time must rise from 0
  * at w = -1 to 1 at strongly phantom w.
  */
+@Tag("slow")
 class EngineSweepTest {
 
     static final Path PAIR = Path.of("..", "scenarios", "tethered-pair.toml");

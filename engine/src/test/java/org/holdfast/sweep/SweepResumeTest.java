@@ -14,6 +14,7 @@ import java.util.Set;
 import java.util.concurrent.TimeUnit;
 
 import org.holdfast.cli.CommandRunner;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -23,6 +24,7 @@ import org.junit.jupiter.api.io.TempDir;
  * once, that the second process made exactly the runs the first had not recorded, and that the
  * results equal those of an uninterrupted sweep.
  */
+@Tag("slow")
 class SweepResumeTest {
 
     @TempDir

@@ -72,6 +72,9 @@ public final class ReplayBench implements BenchSuite {
                 }
             }
             results.put("replay_tracers", tracers);
+            long bytes = steadyBytesPer100Frames(scene, run.timeOf(5), run.timeOf(6) - run.timeOf(5));
+            results.put("replay_scene_bytes_per_100_frames", String.format(Locale.ROOT,
+                    "%d within one snapshot interval, trails included (target 0: %s)", bytes, bytes == 0 ? "met" : "missed"));
             results.put("replay_scene_ms_per_frame", String.format(Locale.ROOT,
                     "%.1f (snapshot reads and interpolation, a new pair every %.1f frames)",
                     sceneNs * 1e-6 / frames, frames / (double) (SNAPSHOTS - 1)));
@@ -82,6 +85,30 @@ public final class ReplayBench implements BenchSuite {
         } finally {
             delete(root);
         }
+    }
+
+    /**
+     * Bytes a warmed scene allocates over 100 frames inside one snapshot interval (from t0, h
+     * long): the least of a few rounds, because the JIT may rebuild an optimised-away object once
+     * while it recompiles; an allocation per frame shows in every round. Its arrays have grown and
+     * its two snapshots are loaded, so the target is none.
+     */
+    static long steadyBytesPer100Frames(ReplayScene scene, double t0, double h) {
+        for (int i = 0; i < 2000; i++) {
+            scene.at(t0 + h * (i % 100) / 100.0);
+        }
+        com.sun.management.ThreadMXBean threads =
+                (com.sun.management.ThreadMXBean) java.lang.management.ManagementFactory.getThreadMXBean();
+        long id = Thread.currentThread().getId();
+        long least = Long.MAX_VALUE;
+        for (int k = 0; k < 5 && least > 0; k++) {
+            long before = threads.getThreadAllocatedBytes(id);
+            for (int i = 0; i < 100; i++) {
+                scene.at(t0 + h * i / 100.0);
+            }
+            least = Math.min(least, threads.getThreadAllocatedBytes(id) - before);
+        }
+        return least;
     }
 
     /** A run folder of invented members on circular paths, written as SnapshotWriter lays it out. */

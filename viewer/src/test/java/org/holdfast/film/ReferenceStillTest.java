@@ -10,6 +10,7 @@ import java.nio.file.StandardCopyOption;
 
 import org.holdfast.replay.DemoRun;
 import org.holdfast.window.ViewRun;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -28,6 +29,7 @@ import org.junit.jupiter.api.io.TempDir;
  * The test also checks that the tolerance tells real changes apart: turning the camera by two
  * degrees, or another stretch, must break it.
  */
+@Tag("slow")
 class ReferenceStillTest {
 
     private static final Path REFERENCE = Path.of("src", "test", "resources", "org", "holdfast", "film",

@@ -13,10 +13,12 @@ import java.nio.file.attribute.FileTime;
 import org.holdfast.render.FrameFiles;
 import org.holdfast.replay.DemoRun;
 import org.holdfast.window.ViewRun;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
 /** {@code holdfast render} on the cut-down demo run: frames, restarts, threads, the looks. */
+@Tag("slow")
 class RenderCommandTest {
 
     @TempDir

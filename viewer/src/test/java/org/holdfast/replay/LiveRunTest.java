@@ -12,6 +12,7 @@ import java.util.List;
 
 import org.holdfast.output.RunFolder;
 import org.holdfast.scenario.ScenarioException;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.Timeout;
 import org.junit.jupiter.api.io.TempDir;
@@ -24,6 +25,7 @@ import com.fasterxml.jackson.databind.ObjectMapper;
  * the same run folder {@code holdfast evolve} writes, and closing it stops the run cleanly.
  */
 @Timeout(300)
+@Tag("slow")
 class LiveRunTest {
 
     @TempDir

@@ -8,11 +8,13 @@ import java.nio.file.Path;
 
 import org.holdfast.output.SnapshotWriter;
 import org.holdfast.render.SceneFrame;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 
 import io.jhdf.HdfFile;
 
 /** Replaying the cut-down demo run: exact at snapshots, accurate between them. */
+@Tag("slow")
 class ReplaySceneTest {
 
     private static double[][] saved(Path run, int i) {
@@ -141,37 +143,6 @@ class ReplaySceneTest {
                 worstTrail, worstPolygon);
         assertTrue(worstPolygon > 20, "the orbits bend visibly between snapshots: " + worstPolygon);
         assertTrue(worstTrail < worstPolygon / 4, "trail " + worstTrail + " deg vs polygon " + worstPolygon);
-    }
-
-    /**
-     * Once its arrays have grown and its two snapshots are loaded, a scene fills frame after
-     * frame without allocating: trails included. A round of 100 frames is measured a few times,
-     * because the JIT may rebuild an optimised-away object once while it recompiles; an
-     * allocation per frame would show in every round.
-     */
-    @Test
-    void framesWithinOneSnapshotIntervalAllocateNothing() {
-        RunArchive run = RunArchive.open(DemoRun.folder());
-        ReplayScene scene = new ReplayScene(run);
-        double t0 = run.timeOf(5);
-        double h = run.timeOf(6) - t0;
-        for (int i = 0; i < 2000; i++) {
-            scene.at(t0 + h * (i % 100) / 100.0);
-        }
-        com.sun.management.ThreadMXBean threads =
-                (com.sun.management.ThreadMXBean) java.lang.management.ManagementFactory.getThreadMXBean();
-        long id = Thread.currentThread().getId();
-        long[] rounds = new long[5];
-        long least = Long.MAX_VALUE;
-        for (int k = 0; k < rounds.length && least > 0; k++) {
-            long before = threads.getThreadAllocatedBytes(id);
-            for (int i = 0; i < 100; i++) {
-                scene.at(t0 + h * i / 100.0);
-            }
-            rounds[k] = threads.getThreadAllocatedBytes(id) - before;
-            least = Math.min(least, rounds[k]);
-        }
-        assertEquals(0, least, "bytes allocated by rounds of 100 frames: " + java.util.Arrays.toString(rounds));
     }
 
     /** Angle in degrees between the directions a to b and b to c of trail g. */

@@ -9,9 +9,11 @@ import org.holdfast.window.Layer;
 import org.holdfast.window.Layers;
 import org.holdfast.window.Projection;
 import org.holdfast.window.ViewState;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 
 /** The view's frames of the cut-down demo run, drawn without a window. */
+@Tag("slow")
 class RunFrameSourceTest {
 
     private static int lit(int[] argb) {

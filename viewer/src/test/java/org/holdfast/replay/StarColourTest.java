@@ -15,6 +15,7 @@ import org.holdfast.render.FateEvent;
 import org.holdfast.render.FateKind;
 import org.holdfast.render.SceneFrame;
 import org.holdfast.scenario.ScenarioException;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 
 /**
@@ -23,6 +24,7 @@ import org.junit.jupiter.api.Test;
  * the absorbed one; the replay must still give each star the colour index of its galaxy among
  * the run's initial members, the index the galaxy itself is coloured by.
  */
+@Tag("slow")
 class StarColourTest {
 
     @Test

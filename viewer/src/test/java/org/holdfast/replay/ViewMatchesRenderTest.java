@@ -14,6 +14,7 @@ import javax.imageio.ImageIO;
 import org.holdfast.window.FrameSources;
 import org.holdfast.window.ViewRun;
 import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.Timeout;
 import org.junit.jupiter.api.io.TempDir;
@@ -28,6 +29,7 @@ import org.junit.jupiter.api.io.TempDir;
  * back exactly (see WindowTest), so any difference is a fault.
  */
 @Timeout(120)
+@Tag("slow")
 class ViewMatchesRenderTest {
 
     @TempDir

@@ -15,6 +15,7 @@ import org.holdfast.output.RunFolder;
 import org.holdfast.replay.DemoRun;
 import org.holdfast.viewer.HoldfastFull;
 import org.holdfast.window.gl.GlWindow;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -28,6 +29,7 @@ import picocli.CommandLine.ParseResult;
  * folder its own evolve example writes, and the quick ones (a still, a one-frame window, the
  * key list) run against such a folder.
  */
+@Tag("slow")
 class HelpExamplesTest {
 
     /** The repository root, seen from the viewer module where Surefire runs. */

@@ -9,10 +9,12 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 
 import org.holdfast.window.input.Bindings;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
 /** Option checking of {@code holdfast view}: all of it happens before a window would open. */
+@Tag("slow")
 class ViewCommandTest {
 
     @TempDir

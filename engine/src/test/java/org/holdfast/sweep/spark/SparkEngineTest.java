@@ -18,6 +18,7 @@ import org.holdfast.sweep.SweepFiles;
 import org.holdfast.sweep.ToyRunFunction;
 import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.BeforeEach;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -25,6 +26,7 @@ import org.junit.jupiter.api.io.TempDir;
  * A real local-mode Spark session ({@code local[2]}) makes the same sweep as the local engine,
  * with the toy physics: the tables must be equal (results.csv without its wall_s column).
  */
+@Tag("slow")
 class SparkEngineTest {
 
     @TempDir

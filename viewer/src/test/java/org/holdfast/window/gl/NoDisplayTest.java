@@ -14,6 +14,7 @@ import java.util.Map;
 import java.util.concurrent.TimeUnit;
 
 import org.holdfast.window.PatternViewMain;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -21,6 +22,7 @@ import org.junit.jupiter.api.io.TempDir;
  * Without a display the view must fail with exit code 2 and one line that points to
  * {@code holdfast render}. Each case runs in a child JVM whose environment lacks a working display.
  */
+@Tag("slow")
 class NoDisplayTest {
 
     @TempDir

@@ -20,6 +20,7 @@ import org.holdfast.window.ViewRun;
 import org.holdfast.window.ViewState;
 import org.holdfast.window.input.Controls;
 import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.Timeout;
 import org.junit.jupiter.api.io.TempDir;
@@ -30,6 +31,7 @@ import org.junit.jupiter.api.io.TempDir;
  * view: the window adds no look of its own.
  */
 @Timeout(60)
+@Tag("slow")
 class WindowTest {
 
     /**
