@@ -91,34 +91,8 @@ public final class TimingFlowCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws Exception {
-        Cosmology base;
-        Path table = data;
-        if (data.getFileName().toString().endsWith(".toml")) {
-            if (cosmology.any()) {
-                throw new ScenarioException("--h0", null, "give the cosmology in " + data + ", not as options");
-            }
-            Node root = ScenarioFile.open(data, Overrides.none());
-            root.allowOnly("cosmology", "flow");
-            base = CosmologyReader.read(root.requireTable("cosmology"));
-            Node flow = root.requireTable("flow");
-            flow.allowOnly("galaxies", "scatter_kms", "background", "age_gyr");
-            Path dir = data.toAbsolutePath().getParent();
-            table = dir.resolve(flow.string("galaxies"));
-            if (!Files.isRegularFile(table)) {
-                throw flow.error("galaxies", "no such galaxy table: " + table);
-            }
-            if (scatter == null && flow.has("scatter_kms")) {
-                scatter = flow.number("scatter_kms");
-            }
-            if (background == null && flow.has("background")) {
-                background = flow.choice("background", Background.keys());
-            }
-            if (ageGyr == null && flow.has("age_gyr")) {
-                ageGyr = flow.positive("age_gyr");
-            }
-        } else {
-            base = cosmology.cosmology();
-        }
+        Path[] table = {data};
+        Cosmology base = data.getFileName().toString().endsWith(".toml") ? readFile(table) : cosmology.cosmology();
         scatterKms = scatter == null ? 0 : scatter;
         Background b = Background.of(background == null ? Background.DARK_ENERGY.key() : background);
         if (b == null) {
@@ -137,7 +111,7 @@ public final class TimingFlowCommand implements Callable<Integer> {
         if (out != null && Files.exists(out) && !Files.isDirectory(out)) {
             throw new ScenarioException("--out", null, "exists and is not a folder: " + out);
         }
-        FlowData d = FlowData.read(table);
+        FlowData d = FlowData.read(table[0]);
         int nThreads = threads == null ? Runtime.getRuntime().availableProcessors() : threads;
         if (nThreads < 1) {
             throw new ScenarioException("--threads", null, "must be at least 1");
@@ -171,6 +145,33 @@ public final class TimingFlowCommand implements Callable<Integer> {
         }
         w.flush();
         return 0;
+    }
+
+    /** Reads a [cosmology] and [flow] file; fills in what the options left open, and the table's path. */
+    private Cosmology readFile(Path[] table) {
+        if (cosmology.any()) {
+            throw new ScenarioException("--h0", null, "give the cosmology in " + data + ", not as options");
+        }
+        Node root = ScenarioFile.open(data, Overrides.none());
+        root.allowOnly("cosmology", "flow");
+        Cosmology base = CosmologyReader.read(root.requireTable("cosmology"));
+        Node flow = root.requireTable("flow");
+        flow.allowOnly("galaxies", "scatter_kms", "background", "age_gyr");
+        Path dir = data.toAbsolutePath().getParent();
+        table[0] = dir.resolve(flow.string("galaxies"));
+        if (!Files.isRegularFile(table[0])) {
+            throw flow.error("galaxies", "no such galaxy table: " + table[0]);
+        }
+        if (scatter == null && flow.has("scatter_kms")) {
+            scatter = flow.number("scatter_kms");
+        }
+        if (background == null && flow.has("background")) {
+            background = flow.choice("background", Background.keys());
+        }
+        if (ageGyr == null && flow.has("age_gyr")) {
+            ageGyr = flow.positive("age_gyr");
+        }
+        return base;
     }
 
     private List<FlowFit.Model> models(Cosmology base, Background b, FlowData d, double[] range) {
