@@ -10,9 +10,13 @@ import java.util.Map;
 import java.util.concurrent.Callable;
 
 import org.holdfast.expansion.Cosmology;
+import org.holdfast.expansion.CosmologyReader;
 import org.holdfast.expansion.ExpansionTable;
 import org.holdfast.expansion.InvalidCosmologyException;
+import org.holdfast.scenario.Node;
+import org.holdfast.scenario.Overrides;
 import org.holdfast.scenario.ScenarioException;
+import org.holdfast.scenario.ScenarioFile;
 import org.holdfast.weighing.Background;
 import org.holdfast.weighing.FlowCurve;
 import org.holdfast.weighing.FlowData;
@@ -40,11 +44,13 @@ import picocli.CommandLine.Spec;
             "name,distance_kpc,distance_err_kpc,velocity_kms,velocity_err_kms (relative to the group's barycentre).",
             "",
             "Example:",
-            "  holdfast timing flow scenarios/brisk-flow.csv --h0 70 --omega-m 0.3 --scatter-kms 25"
+            "  holdfast timing flow scenarios/brisk-flow.csv --h0 70 --omega-m 0.3 --scatter-kms 25",
+            "  holdfast timing flow scenarios/brisk-flow.toml --fit-h0 60:80:5"
         })
 public final class TimingFlowCommand implements Callable<Integer> {
 
-    @Parameters(index = "0", paramLabel = "GALAXIES.csv", description = "The galaxies around the group.")
+    @Parameters(index = "0", paramLabel = "GALAXIES.csv|FILE.toml",
+            description = "The galaxies around the group, or a file with [cosmology] and [flow] (galaxies = \"FILE.csv\").")
     Path data;
 
     @Mixin
@@ -54,9 +60,12 @@ public final class TimingFlowCommand implements Callable<Integer> {
     Double ageGyr;
 
     @Option(names = "--background", paramLabel = "KIND", description = "none, dark_energy (default) or full.")
-    String background = "dark_energy";
+    String background;
 
     @Option(names = "--scatter-kms", paramLabel = "KM_S", description = "Intrinsic velocity scatter added to every error (default 0).")
+    Double scatter;
+
+    /** The scatter used (option, file or 0). */
     double scatterKms;
 
     @Option(names = "--fit-h0", paramLabel = "LO:HI:N", description = "Also fit H0 over this grid (km/s/Mpc).")
@@ -82,7 +91,10 @@ public final class TimingFlowCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws Exception {
-        Background b = Background.of(background);
+        Path[] table = {data};
+        Cosmology base = data.getFileName().toString().endsWith(".toml") ? readFile(table) : cosmology.cosmology();
+        scatterKms = scatter == null ? 0 : scatter;
+        Background b = Background.of(background == null ? Background.DARK_ENERGY.key() : background);
         if (b == null) {
             throw new ScenarioException("--background", null, "expected one of " + Background.keys() + ", got '" + background + "'");
         }
@@ -99,12 +111,11 @@ public final class TimingFlowCommand implements Callable<Integer> {
         if (out != null && Files.exists(out) && !Files.isDirectory(out)) {
             throw new ScenarioException("--out", null, "exists and is not a folder: " + out);
         }
-        FlowData d = FlowData.read(data);
+        FlowData d = FlowData.read(table[0]);
         int nThreads = threads == null ? Runtime.getRuntime().availableProcessors() : threads;
         if (nThreads < 1) {
             throw new ScenarioException("--threads", null, "must be at least 1");
         }
-        Cosmology base = cosmology.cosmology();
         double[] masses = new double[161];
         for (int i = 0; i < masses.length; i++) {
             masses[i] = Math.exp(Math.log(range[0]) + (Math.log(range[1]) - Math.log(range[0])) * i / (masses.length - 1));
@@ -134,6 +145,33 @@ public final class TimingFlowCommand implements Callable<Integer> {
         }
         w.flush();
         return 0;
+    }
+
+    /** Reads a [cosmology] and [flow] file; fills in what the options left open, and the table's path. */
+    private Cosmology readFile(Path[] table) {
+        if (cosmology.any()) {
+            throw new ScenarioException("--h0", null, "give the cosmology in " + data + ", not as options");
+        }
+        Node root = ScenarioFile.open(data, Overrides.none());
+        root.allowOnly("cosmology", "flow");
+        Cosmology base = CosmologyReader.read(root.requireTable("cosmology"));
+        Node flow = root.requireTable("flow");
+        flow.allowOnly("galaxies", "scatter_kms", "background", "age_gyr");
+        Path dir = data.toAbsolutePath().getParent();
+        table[0] = dir.resolve(flow.string("galaxies"));
+        if (!Files.isRegularFile(table[0])) {
+            throw flow.error("galaxies", "no such galaxy table: " + table[0]);
+        }
+        if (scatter == null && flow.has("scatter_kms")) {
+            scatter = flow.number("scatter_kms");
+        }
+        if (background == null && flow.has("background")) {
+            background = flow.choice("background", Background.keys());
+        }
+        if (ageGyr == null && flow.has("age_gyr")) {
+            ageGyr = flow.positive("age_gyr");
+        }
+        return base;
     }
 
     private List<FlowFit.Model> models(Cosmology base, Background b, FlowData d, double[] range) {

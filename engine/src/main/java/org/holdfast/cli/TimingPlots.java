@@ -147,7 +147,14 @@ final class TimingPlots {
                 k++;
             }
         }
-        Charts.points(c, "galaxies", d.distanceKpc(), d.velocityKms(), 1, 7);
+        var pts = Charts.points(c, "galaxies", d.distanceKpc(), d.velocityKms(), 1, 7);
+        // the velocity errors as bars (the distance errors enter the fit through the slope)
+        c.removeSeries(pts.getName());
+        var withBars = c.addSeries("galaxies (velocity errors)", d.distanceKpc(), d.velocityKms(), d.velocityErrKms());
+        withBars.setXYSeriesRenderStyle(org.knowm.xchart.XYSeries.XYSeriesRenderStyle.Scatter);
+        withBars.setMarker(pts.getMarker());
+        withBars.setMarkerColor(pts.getMarkerColor());
+        c.getStyler().setErrorBarsColorSeriesColor(true);
         Charts.line(c, String.format(java.util.Locale.ROOT, "best fit, M = %.3g Msun", fit.bestMassMsun()),
                 Arrays.copyOf(x, k), Arrays.copyOf(y, k), 0);
         double r0 = fit.bestModel().curve().zeroVelocityKpc(fit.bestMassMsun());

@@ -49,22 +49,7 @@ public final class FlowFit {
      */
     public static Result fit(FlowData data, List<Model> models, double scatterKms, double[] massGrid, int threads) {
         int nm = massGrid.length;
-        double[][] lnL = new double[models.size()][nm];
-        ForkJoinPool pool = new ForkJoinPool(Math.max(1, threads));
-        try {
-            pool.submit(() -> IntStream.range(0, models.size()).parallel().forEach(j -> {
-                for (int i = 0; i < nm; i++) {
-                    lnL[j][i] = lnLikelihood(data, models.get(j).curve(), scatterKms, massGrid[i]);
-                }
-            })).get();
-        } catch (InterruptedException e) {
-            Thread.currentThread().interrupt();
-            throw new IllegalStateException("interrupted", e);
-        } catch (ExecutionException e) {
-            throw e.getCause() instanceof RuntimeException r ? r : new IllegalStateException(e.getCause());
-        } finally {
-            pool.shutdown();
-        }
+        double[][] lnL = grid(data, models, scatterKms, massGrid, threads);
         double top = Double.NEGATIVE_INFINITY;
         int bj = 0;
         int bi = 0;
@@ -111,6 +96,27 @@ public final class FlowFit {
         Model best = models.get(bj);
         return new Result(massGrid[bi], best.parameter(), mass, r0, param,
                 chi2(data, best.curve(), scatterKms, massGrid[bi]), massGrid, pm, best);
+    }
+
+    /** ln L on the grid of models and masses, one model per task (the same on any thread count). */
+    private static double[][] grid(FlowData data, List<Model> models, double scatterKms, double[] massGrid, int threads) {
+        double[][] lnL = new double[models.size()][massGrid.length];
+        ForkJoinPool pool = new ForkJoinPool(Math.max(1, threads));
+        try {
+            pool.submit(() -> IntStream.range(0, models.size()).parallel().forEach(j -> {
+                for (int i = 0; i < massGrid.length; i++) {
+                    lnL[j][i] = lnLikelihood(data, models.get(j).curve(), scatterKms, massGrid[i]);
+                }
+            })).get();
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+            throw new IllegalStateException("interrupted", e);
+        } catch (ExecutionException e) {
+            throw e.getCause() instanceof RuntimeException r ? r : new IllegalStateException(e.getCause());
+        } finally {
+            pool.shutdown();
+        }
+        return lnL;
     }
 
     /** ln L of the data for one relation and mass; -infinity if a galaxy is off the table. */

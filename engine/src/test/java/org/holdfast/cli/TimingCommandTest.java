@@ -149,4 +149,18 @@ class TimingCommandTest {
         assertEquals(2, r.exitCode());
         assertTrue(r.err().contains("--separation-kpc"), r.err());
     }
+    @Test
+    void theFlowFitReadsAScenarioSectionAndNamesItsBadKeys(@org.junit.jupiter.api.io.TempDir java.nio.file.Path dir)
+            throws Exception {
+        CommandRunner.Result r = CommandRunner.run("timing", "flow", "../scenarios/brisk-flow.toml", "--json");
+        assertEquals(0, r.exitCode(), r.err());
+        JsonNode j = new ObjectMapper().readTree(r.out());
+        assertEquals(25, j.get("scatter_kms").asDouble(), 0);
+        assertEquals("dark_energy", j.get("background").asText());
+        java.nio.file.Path f = dir.resolve("flow.toml");
+        java.nio.file.Files.writeString(f, "[cosmology]\nh0 = 70.0\nomega_m = 0.3\n[flow]\ngalaxies = \"x.csv\"\nscater_kms = 3\n");
+        CommandRunner.Result bad = CommandRunner.run("timing", "flow", f.toString());
+        assertEquals(2, bad.exitCode());
+        assertTrue(bad.err().contains("flow.toml:6") && bad.err().contains("scater_kms"), bad.err());
+    }
 }
