@@ -208,7 +208,7 @@ class BadInputFaultsTest {
         assertEquals(0, CommandRunner.run("evolve", PAIR.toString(), "--out", out.toString(), "--until", "5",
                 "--quiet").exitCode());
         List<String> rows = Files.readAllLines(out.resolve("tracks.csv"));
-        assertEquals("t_gyr,a,name,x_kpc,y_kpc,z_kpc,vx_kms,vy_kms,vz_kms,mass_msun", rows.get(0));
+        assertEquals("t_gyr,a,name,x_kpc,y_kpc,z_kpc,vx_kms,vy_kms,vz_kms,mass_msun,stripped_msun", rows.get(0));
         assertEquals(1 + 2 * 11, rows.size(), "two galaxies at each of 11 snapshots");
         assertTrue(Files.readString(out.resolve("tracks.csv")).endsWith("\n"));
     }
