@@ -4,7 +4,7 @@ import java.util.List;
 
 import org.holdfast.render.CameraPose;
 import org.holdfast.render.FateEvent;
-import org.holdfast.render.FateKind;
+import org.holdfast.run.RunEvent;
 import org.holdfast.render.SceneFrame;
 import org.joml.Vector3d;
 
@@ -58,7 +58,7 @@ final class FollowTarget {
     /** The galaxy that took {@code member} in by a merger, or null. */
     private String survivorOf(String member) {
         for (FateEvent e : events) {
-            if (e.kind() == FateKind.MERGED && e.members().indexOf(member) > 0) {
+            if (e.kind() == RunEvent.Kind.MERGED && e.members().indexOf(member) > 0) {
                 return e.members().get(0);
             }
         }

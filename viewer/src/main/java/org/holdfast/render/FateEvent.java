@@ -3,6 +3,8 @@ package org.holdfast.render;
 import java.util.List;
 import java.util.Objects;
 
+import org.holdfast.run.RunEvent;
+
 /**
  * One fate event in view: when it happened, what kind, and the members it concerns (for a
  * merger, the survivor first).
@@ -11,7 +13,7 @@ import java.util.Objects;
  * @param kind what happened
  * @param members names of the galaxies involved, at least one
  */
-public record FateEvent(double tGyr, FateKind kind, List<String> members) {
+public record FateEvent(double tGyr, RunEvent.Kind kind, List<String> members) {
 
     public FateEvent {
         Objects.requireNonNull(kind, "kind");
@@ -26,8 +28,9 @@ public record FateEvent(double tGyr, FateKind kind, List<String> members) {
 
     /**
      * The event as one line of plain words, e.g. "Tessaly merged with Brin". Each kind is told
-     * with the word of its key in summary.json and the fate table (merged, escaped, ripped), so
-     * that a film's audience and a reader of the run's files name the same event alike.
+     * with the word of its key in summary.json and the fate table (merged, escaped, ripped,
+     * unbound, dissolved), so that a film's audience and a reader of the run's files name the
+     * same event alike.
      */
     public String describe() {
         String first = members.get(0);
@@ -37,6 +40,8 @@ public record FateEvent(double tGyr, FateKind kind, List<String> members) {
                     : first + " merged with " + String.join(" and ", members.subList(1, members.size()));
             case ESCAPED -> all + " escaped the group";
             case RIPPED -> all + " ripped away by dark energy";
+            case UNBOUND -> all + (members.size() == 1 ? " was" : " were") + " unbound from the start";
+            case DISSOLVED -> "the group dissolved (" + all + ")";
         };
     }
 }

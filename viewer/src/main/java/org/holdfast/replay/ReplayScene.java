@@ -4,7 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 
 import org.holdfast.render.FateEvent;
-import org.holdfast.render.FateKind;
+import org.holdfast.run.RunEvent;
 import org.holdfast.render.SceneFrame;
 import org.holdfast.render.SnapshotInterpolation;
 import org.holdfast.units.Units;
@@ -203,7 +203,7 @@ public final class ReplayScene {
         List<FateEvent> all = run.events();
         for (int i = 0; i < all.size(); i++) {
             FateEvent e = all.get(i);
-            if (e.kind() == FateKind.MERGED && e.tGyr() >= lo && e.tGyr() <= hi
+            if (e.kind() == RunEvent.Kind.MERGED && e.tGyr() >= lo && e.tGyr() <= hi
                     && e.members().indexOf(name) > 0) {
                 return e;
             }

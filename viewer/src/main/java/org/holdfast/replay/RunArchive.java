@@ -22,7 +22,7 @@ import org.holdfast.output.RunFolder;
 import org.holdfast.output.SnapshotWriter;
 import org.holdfast.output.TrackWriter;
 import org.holdfast.render.FateEvent;
-import org.holdfast.render.FateKind;
+import org.holdfast.run.RunEvent;
 import org.holdfast.scenario.ScenarioException;
 
 import com.fasterxml.jackson.databind.JsonNode;
@@ -222,16 +222,11 @@ public final class RunArchive {
     }
 
     /**
-     * A fate event from its key in summary.json ("merged", "escaped", "ripped") and members;
-     * null for other kinds or no members.
+     * A fate event from its key in summary.json (one of {@link RunEvent.Kind}'s words) and
+     * members; null for an unknown kind or no members.
      */
     static FateEvent event(String kindKey, double tGyr, List<String> members) {
-        FateKind kind = switch (kindKey) {
-            case "merged" -> FateKind.MERGED;
-            case "escaped" -> FateKind.ESCAPED;
-            case "ripped" -> FateKind.RIPPED;
-            default -> null;
-        };
+        RunEvent.Kind kind = RunEvent.Kind.of(kindKey);
         return kind == null || members.isEmpty() ? null : new FateEvent(tGyr, kind, members);
     }
 

@@ -7,7 +7,7 @@ import java.util.List;
 
 import org.holdfast.render.CameraPose;
 import org.holdfast.render.FateEvent;
-import org.holdfast.render.FateKind;
+import org.holdfast.run.RunEvent;
 import org.holdfast.render.SceneFrame;
 import org.joml.Quaterniond;
 import org.joml.Vector3d;
@@ -41,7 +41,7 @@ class FollowTargetTest {
 
     @Test
     void afterAMergerItRidesWithTheSurvivorAndWithoutAnyoneItHoldsItsLastShift() {
-        FateEvent merger = new FateEvent(2, FateKind.MERGED, List.of("Ombrine", "Vell"));
+        FateEvent merger = new FateEvent(2, RunEvent.Kind.MERGED, List.of("Ombrine", "Vell"));
         FollowTarget f = new FollowTarget("Vell", List.of(merger));
         f.shift(frame(1, new String[] {"Ombrine", "Vell"}, new double[] {-50, 700}), aroundOrigin());
         CameraPose after = f.shift(frame(3, new String[] {"Ombrine"}, new double[] {40}), aroundOrigin());

@@ -13,6 +13,7 @@ import java.util.SplittableRandom;
 import org.holdfast.render.projection.DomeProjection;
 import org.holdfast.render.projection.FlatProjection;
 import org.holdfast.render.projection.PanoramaProjection;
+import org.holdfast.run.RunEvent;
 import org.holdfast.render.projection.Projection;
 import org.joml.Vector3d;
 import org.junit.jupiter.api.Test;
@@ -352,9 +353,9 @@ class FrameRendererTest {
     @Test
     void overlaysDrawOnlyWhenSwitchedOn() {
         SceneFrame scene = cloud(2000, 3).setEvents(List.of(
-                new FateEvent(1.1, FateKind.MERGED, List.of("Brin", "Orrin")),
-                new FateEvent(2.0, FateKind.ESCAPED, List.of("Tessaly")),
-                new FateEvent(9.0, FateKind.RIPPED, List.of("Brin"))));
+                new FateEvent(1.1, RunEvent.Kind.MERGED, List.of("Brin", "Orrin")),
+                new FateEvent(2.0, RunEvent.Kind.ESCAPED, List.of("Tessaly")),
+                new FateEvent(9.0, RunEvent.Kind.RIPPED, List.of("Brin"))));
         int[] bare;
         try (FrameRenderer r = new FrameRenderer(new FlatProjection(320, 200, 50), new RenderSettings().noOverlays())) {
             bare = pixels(r.render(scene, front()));
@@ -371,7 +372,7 @@ class FrameRendererTest {
     @Test
     void eventsAfterTheClockAreNotShownYet() {
         SceneFrame before = cloud(100, 3);
-        SceneFrame withFuture = cloud(100, 3).setEvents(List.of(new FateEvent(9.0, FateKind.RIPPED, List.of("Brin"))));
+        SceneFrame withFuture = cloud(100, 3).setEvents(List.of(new FateEvent(9.0, RunEvent.Kind.RIPPED, List.of("Brin"))));
         try (FrameRenderer r = new FrameRenderer(new FlatProjection(320, 200, 50),
                 new RenderSettings().noOverlays().overlay(Overlay.EVENTS, true))) {
             int[] a = pixels(r.render(before, front()));
@@ -382,9 +383,13 @@ class FrameRendererTest {
 
     @Test
     void eventWordsNameTheMembers() {
-        assertEquals("Brin merged with Orrin", new FateEvent(1, FateKind.MERGED, List.of("Brin", "Orrin")).describe());
-        assertEquals("Tessaly escaped the group", new FateEvent(1, FateKind.ESCAPED, List.of("Tessaly")).describe());
-        assertEquals("Vell ripped away by dark energy", new FateEvent(1, FateKind.RIPPED, List.of("Vell")).describe());
+        assertEquals("Brin merged with Orrin", new FateEvent(1, RunEvent.Kind.MERGED, List.of("Brin", "Orrin")).describe());
+        assertEquals("Tessaly escaped the group", new FateEvent(1, RunEvent.Kind.ESCAPED, List.of("Tessaly")).describe());
+        assertEquals("Vell ripped away by dark energy", new FateEvent(1, RunEvent.Kind.RIPPED, List.of("Vell")).describe());
+        assertEquals("Vell was unbound from the start",
+                new FateEvent(0, RunEvent.Kind.UNBOUND, List.of("Vell")).describe());
+        assertEquals("the group dissolved (Brin and Orrin)",
+                new FateEvent(3, RunEvent.Kind.DISSOLVED, List.of("Brin", "Orrin")).describe());
     }
 
     private static float maxOf(LightBuffer light, int channel) {

@@ -12,7 +12,7 @@ import java.util.List;
 import java.util.Map;
 
 import org.holdfast.render.FateEvent;
-import org.holdfast.render.FateKind;
+import org.holdfast.run.RunEvent;
 import org.holdfast.render.SceneFrame;
 import org.holdfast.scenario.ScenarioException;
 import org.junit.jupiter.api.Tag;
@@ -31,7 +31,7 @@ class StarColourTest {
     void afterTheDemosFirstMergerEveryStarKeepsItsGalaxysColour() {
         RunArchive run = RunArchive.open(DemoRun.mergerFolder());
         List<String> initial = run.initialNames();
-        FateEvent merger = run.events().stream().filter(e -> e.kind() == FateKind.MERGED).findFirst().orElseThrow();
+        FateEvent merger = run.events().stream().filter(e -> e.kind() == RunEvent.Kind.MERGED).findFirst().orElseThrow();
         double end = run.lastGyr();
         assertTrue(merger.tGyr() < end, "the run goes past its first merger: " + merger);
         String absorbed = merger.members().get(1);
@@ -39,7 +39,7 @@ class StarColourTest {
                 "galaxies come after the absorbed one, so they are renumbered: " + initial);
         Map<String, String> into = new HashMap<>();
         for (FateEvent e : run.events()) {
-            if (e.kind() == FateKind.MERGED && e.tGyr() <= end) {
+            if (e.kind() == RunEvent.Kind.MERGED && e.tGyr() <= end) {
                 into.put(e.members().get(1), e.members().get(0));
             }
         }
