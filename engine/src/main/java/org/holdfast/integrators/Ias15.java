@@ -35,6 +35,8 @@ public final class Ias15 implements DenseOutput {
     private static final double[][] C = new double[8][7];
     /** D[k][m]: divided difference of s^(m+1) on h0..hk: power to Newton basis. */
     private static final double[][] D = new double[8][7];
+    /** Sum over the nodes of |1 / prod (h_k - h_j)|: how much b6 amplifies noise in the accelerations. */
+    private static final double B6_GAIN = b6Gain();
     /** Radau quadrature weights on the nodes, for the integral over [0, 1]. */
     static final double[] WEIGHTS = radauWeights();
     private static final double[] X_DIV = {6, 12, 20, 30, 42, 56, 72};
@@ -211,13 +213,23 @@ public final class Ias15 implements DenseOutput {
             java.util.Arrays.fill(b, 0, 7 * capacity, 0);
         }
         double hNew;
+        double ebRejected = Double.NaN;
         while (true) {
             newtonFromPower(len);
             double amax = iterate(s, h, len);
             hNew = proposal(h, amax, len);
-            if (epsilon == 0 || Math.abs(hNew) >= SAFETY * Math.abs(h) || !Double.isFinite(hNew) || hNew == 0 || rejectedInARow >= MAX_REJECTIONS) {
+            if (epsilon == 0 || Math.abs(hNew) >= SAFETY * Math.abs(h) || !Double.isFinite(hNew) || hNew == 0
+                    || rejectedInARow >= MAX_REJECTIONS) {
                 break;
             }
+            // a redone step at least four times shorter should see its b6 fall by 4^7; where it barely
+            // falls, the estimate is the round-off of the forces (a time-dependent force whose
+            // argument has lost digits, as k(t) close to a rip): shorter steps would not help
+            if (!Double.isNaN(ebRejected) && lastEb > 0.1 * ebRejected) {
+                hNew = h;
+                break;
+            }
+            ebRejected = lastEb;
             rejectedInARow++;
             rejections++;
             rescale(hNew / h, len);
@@ -235,6 +247,11 @@ public final class Ias15 implements DenseOutput {
     }
 
     private int rejectedInARow;
+    private double lastEb;
+    /** The predictor-corrector's last relative correction of b6 when it stalled above round-off; 0 if it converged. */
+    private double noise;
+    /** An error estimate within this factor of the stalled corrections is taken for noise. */
+    private static final double NOISE_FACTOR = 10;
 
     /** g = D b: the Newton coefficients of the current polynomial. */
     private void newtonFromPower(int len) {
@@ -255,8 +272,14 @@ public final class Ias15 implements DenseOutput {
         double err = 2;
         double errLast = 3;
         double amax = 0;
+        noise = 0;
         for (int it = 0; it < PC_MAX; it++) {
-            if (err < PC_EPSILON || (it > 2 && err >= errLast)) {
+            if (err < PC_EPSILON) {
+                break;
+            }
+            if (it > 2 && err >= errLast) {
+                // the corrections stopped shrinking: b6 is known only to about their size
+                noise = Math.max(err, errLast);
                 break;
             }
             errLast = err;
@@ -270,6 +293,9 @@ public final class Ias15 implements DenseOutput {
             }
             amax = maxAbs(as, len);
             err = amax > 0 ? dmax / amax : (dmax > 0 ? 1 : 0);
+            if (it == PC_MAX - 1 && err >= PC_EPSILON) {
+                noise = err;
+            }
         }
         return amax;
     }
@@ -335,10 +361,23 @@ public final class Ias15 implements DenseOutput {
             return Double.isFinite(b6) ? h / SAFETY : h * SAFETY * SAFETY;
         }
         double eb = b6 / amax;
+        lastEb = eb;
         if (eb == 0) {
             return h / SAFETY;
         }
-        return h * Math.pow(epsilon / eb, 1.0 / 7);
+        double b0 = 0;
+        for (int i = 0; i < len; i++) {
+            b0 = Math.max(b0, Math.abs(b[i]));
+        }
+        // round-off of the forces: their own (2^-52) and that of the clock, |da/dt| ulp(t) with
+        // da/dt about b0 / h, carried to b6 by the seventh divided difference (gain B6_GAIN)
+        double floor = B6_GAIN * (0x1p-52 + Math.ulp(t) * b0 / (Math.abs(h) * amax));
+        double proposed = h * Math.pow(epsilon / eb, 1.0 / 7);
+        if (eb <= NOISE_FACTOR * Math.max(noise, floor) && Math.abs(proposed) < Math.abs(h)) {
+            // the estimate is within the forces' round-off: it cannot ask for a shorter step
+            return h;
+        }
+        return proposed;
     }
 
     /** The same polynomial over a step ratio times as long: b_m scales with ratio^(m+1). */
@@ -479,6 +518,20 @@ public final class Ias15 implements DenseOutput {
             px[i] = x0[i] + hs * (v0[i] + hs * (0.5 * a0[i] + sn * cx));
             pv[i] = v0[i] + hs * (a0[i] + sn * cv);
         }
+    }
+
+    private static double b6Gain() {
+        double sum = 0;
+        for (int k = 0; k < NODES.length; k++) {
+            double p = 1;
+            for (int j = 0; j < NODES.length; j++) {
+                if (j != k) {
+                    p *= NODES[k] - NODES[j];
+                }
+            }
+            sum += 1 / Math.abs(p);
+        }
+        return sum;
     }
 
     /**

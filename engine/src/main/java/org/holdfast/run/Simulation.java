@@ -19,7 +19,6 @@ import org.holdfast.group.StarsSpec;
 import org.holdfast.halos.HaloProfile;
 import org.holdfast.halos.Halos;
 import org.holdfast.integrators.Integrator;
-import org.holdfast.integrators.SymmetricStepSize;
 import org.holdfast.units.Units;
 
 /**
@@ -43,8 +42,16 @@ public final class Simulation implements RunView, AutoCloseable {
     private final RunSettings settings;
     private final ExpansionHistory history;
     private final GroupSystem system;
-    private final Integrator integrator;
-    private final SymmetricStepSize stepSize;
+    private final GalaxyStepper stepper;
+    /** Null when members do not merge. */
+    private final MergerEvents mergerEvents;
+    private double tracerTime;
+    /** While an output inside a step is shown: the time and the bodies sampled there. */
+    private boolean sampling;
+    private double sampleT;
+    private final double[] sampleX;
+    private final double[] sampleV;
+    private final double[][] shown;
     private final double[] frameOffset;
     private final double[] frameVelocity;
     /** Null when members do not merge (a backward run, or merge_within_kpc = 0). */
@@ -61,12 +68,22 @@ public final class Simulation implements RunView, AutoCloseable {
         this.settings = settings;
         this.history = history;
         this.system = system;
-        this.integrator = Integrator.of(settings.scheme());
-        this.stepSize = settings.fixedStep() ? null : new SymmetricStepSize(settings.accuracy(), 2);
+        double fixed = settings.fixedStep() ? settings.stepMyr() * Units.MYR : Double.NaN;
+        this.stepper = settings.scheme() == RunSettings.Scheme.IAS15
+                ? new Ias15Stepper(system, settings.accuracy(), fixed)
+                : new SplitStepper(system, Integrator.of(settings.scheme()), settings.accuracy(), fixed);
         this.frameOffset = offset;
         this.frameVelocity = velocity;
         this.mergers = settings.mergers()
                 ? new Mergers(settings.mergeWithinKpc(), history, settings.darkEnergyForce()) : null;
+        this.mergerEvents = mergers == null ? null
+                : new MergerEvents(mergers, history, settings.darkEnergyForce(), system.bodies.x.length);
+        int cap = 3 * system.bodies.x.length;
+        this.sampleX = new double[cap];
+        this.sampleV = new double[cap];
+        int n = system.bodies.x.length;
+        this.shown = new double[6][n];
+        this.tracerTime = settings.startGyr();
     }
 
     /** A simulation using every core for the tracers. */
@@ -113,8 +130,11 @@ public final class Simulation implements RunView, AutoCloseable {
         DynamicalFriction friction = settings.dynamicalFriction() ? friction(gs, bodies, settings) : null;
         GroupSystem system = new GroupSystem(bodies, tracers, new PairGravity(table), tide,
                 new TracerField(threads), friction, settings.startGyr());
-        Simulation sim = new Simulation(settings, history, system, cm, cv);
         system.updateAccelerations();
+        if (tracers.count > 0) {
+            system.field.accelerate(tracers, bodies, tide.coefficient(settings.startGyr()));
+        }
+        Simulation sim = new Simulation(settings, history, system, cm, cv);
         sim.energy0 = system.energyBudget();
         sim.energyNow = sim.energy0;
         sim.energyScale = energyScale(system);
@@ -131,7 +151,12 @@ public final class Simulation implements RunView, AutoCloseable {
         return group.tracerCount() * Tracers.BYTES_PER_TRACER + n * BYTES_PER_BODY + tables;
     }
 
-    /** Steps from startGyr to untilGyr, calling the observers; returns why and how it stopped. */
+    /**
+     * Steps from startGyr to untilGyr, calling the observers; returns why and how it stopped.
+     * No step is shortened to land on a snapshot time: snapshots inside a step sample its dense
+     * output (the bodies) and bring the tracers to that time on their own steps, so the snapshot
+     * interval does not change the bodies' trajectory. Mergers are located on the dense output.
+     */
     public RunResult run(List<RunObserver> observers) {
         long wall0 = System.nanoTime();
         double start = settings.startGyr();
@@ -142,33 +167,50 @@ public final class Simulation implements RunView, AutoCloseable {
         SnapshotClock clock = new SnapshotClock(start, end, every);
         observers.forEach(o -> o.init(this));
         snapshot(observers);
+        double nextOut = clock.next(start);
+        double dir = Math.signum(end - start);
         StopReason reason = null;
         while (reason == null && system.time() != end) {
             if (cancelled) {
                 reason = new StopReason(StopReason.Kind.CANCELLED, "cancelled at " + fmt(system.time()) + " Gyr");
                 break;
             }
-            double target = clock.next(system.time());
-            double h = chooseStep(target);
+            double t = system.time();
+            double toEnd = end - t;
+            double room = historyRoom(t, Math.signum(toEnd));
+            double limit = room < Math.abs(toEnd) ? Math.copySign(room, toEnd) : toEnd;
+            double h = limit == 0 ? 0 : stepper.step(limit);
             if (h == 0) {
                 reason = new StopReason(StopReason.Kind.NON_FINITE,
                         "step size fell to zero at " + fmt(system.time()) + " Gyr");
                 break;
             }
-            double before = system.time();
-            integrator.step(system, h);
             steps++;
-            // a step chosen to land on the target lands there exactly, whatever the sum of sub-steps rounds to
-            boolean onTarget = h == target - before;
-            if (onTarget) {
-                system.setTime(target);
+            if (h == toEnd) {
+                system.setTime(end);
             }
-            reason = checkFinite();
+            reason = checkFinite(false);
             if (reason != null) {
                 break;
             }
-            if (mergers != null && mergers.check(system)) {
-                updateEnergy();
+            double stepEnd = system.time();
+            double event = mergerEvents == null ? Double.NaN : mergerEvents.locate(system.bodies, stepper.dense(), t, stepEnd);
+            double upTo = Double.isNaN(event) ? stepEnd : event;
+            while (dir * (nextOut - upTo) < 0 || (nextOut == upTo && !Double.isNaN(event))) {
+                showSampled(observers, nextOut);
+                nextOut = clock.next(nextOut);
+            }
+            if (!Double.isNaN(event)) {
+                mergeAt(event);
+            } else {
+                advanceTracers(stepper.dense(), stepEnd);
+                if (mergerEvents != null && mergerEvents.anyInside() && mergers.check(system)) {
+                    afterMerger();
+                }
+            }
+            reason = checkFinite(true);
+            if (reason != null) {
+                break;
             }
             if (system.bodies.count() <= 64) {
                 updateEnergy();
@@ -176,8 +218,9 @@ public final class Simulation implements RunView, AutoCloseable {
             for (RunObserver o : observers) {
                 o.afterStep(this);
             }
-            if (onTarget && system.time() != end) {
+            if (nextOut == system.time() && system.time() != end) {
                 snapshot(observers);
+                nextOut = clock.next(nextOut);
             }
         }
         if (reason == null) {
@@ -189,6 +232,60 @@ public final class Simulation implements RunView, AutoCloseable {
         }
         return new RunResult(reason, system.time(), steps, (System.nanoTime() - wall0) * 1e-9, maxResidual);
     }
+
+    /** A snapshot at time t inside the last step: the bodies from its interpolant, the tracers stepped there. */
+    private void showSampled(List<RunObserver> observers, double t) {
+        advanceTracers(stepper.dense(), t);
+        stepper.dense().sample(t, sampleX, sampleV);
+        int n = system.bodies.count();
+        for (int k = 0; k < 3; k++) {
+            System.arraycopy(sampleX, k * n, shown[k], 0, n);
+            System.arraycopy(sampleV, k * n, shown[3 + k], 0, n);
+        }
+        sampleT = t;
+        sampling = true;
+        try {
+            for (RunObserver o : observers) {
+                o.atSnapshot(this);
+            }
+        } finally {
+            sampling = false;
+        }
+    }
+
+    /** The located merger: the bodies set to the interpolant at t, the tracers brought there, then the merge. */
+    private void mergeAt(double t) {
+        advanceTracers(stepper.dense(), t);
+        stepper.dense().sample(t, sampleX, sampleV);
+        system.copyIn(t, sampleX, sampleV);
+        mergers.merge(system, mergerEvents.first(), mergerEvents.second());
+        afterMerger();
+    }
+
+    private void afterMerger() {
+        stepper.restart();
+        if (system.tracers.count > 0) {
+            system.field.accelerate(system.tracers, system.bodies, system.tide.coefficient(system.time()));
+        }
+        updateEnergy();
+    }
+
+    /** Moves the tracers from where they are to time t along the last step of the bodies. */
+    private void advanceTracers(org.holdfast.integrators.DenseOutput path, double t) {
+        if (system.tracers.count == 0 || t == tracerTime) {
+            return;
+        }
+        system.field.advance(system.tracers, path, system.bodies.count(), system.bodies.halo, system.tide, tracerTime, t,
+                TRACER_ETA);
+        tracerTime = t;
+    }
+
+    /**
+     * Tracers take steps of at most this fraction of their own dynamical time (about 63 steps of
+     * a fourth-order method per circular orbit): they are for pictures (see the README for the
+     * accuracy measured).
+     */
+    static final double TRACER_ETA = 0.1;
 
     private double maxResidual;
 
@@ -214,6 +311,7 @@ public final class Simulation implements RunView, AutoCloseable {
     }
 
     private void snapshot(List<RunObserver> observers) {
+        advanceTracers(stepper.dense(), system.time());
         updateEnergy();
         for (RunObserver o : observers) {
             o.atSnapshot(this);
@@ -226,31 +324,12 @@ public final class Simulation implements RunView, AutoCloseable {
         maxResidual = Math.max(maxResidual, residual);
     }
 
-    /** The signed step toward target: fixed or adaptive, landing on it, every sub-step inside the history. */
-    private double chooseStep(double target) {
-        double t = system.time();
-        double toTarget = target - t;
-        double room = historyRoom(t, Math.signum(toTarget));
-        boolean clipped = room < Math.abs(toTarget);
-        double limit = clipped ? Math.copySign(room, toTarget) : toTarget;
-        double h;
-        if (stepSize == null) {
-            h = Math.copySign(settings.stepMyr() * Units.MYR, limit);
-        } else {
-            h = stepSize.choose(integrator, system, limit);
-        }
-        if (Math.abs(h) >= Math.abs(limit) * (1 - 1e-9)) {
-            h = limit;
-        }
-        return h;
-    }
-
     /** The longest step in direction dir whose sub-steps all stay inside the expansion history. */
     private double historyRoom(double t, double dir) {
         double ahead = dir > 0 ? history.latestGyr() - t : t - history.earliestGyr();
         double behind = dir > 0 ? t - history.earliestGyr() : history.latestGyr() - t;
-        double over = integrator.maxTimeFraction();
-        double under = -integrator.minTimeFraction();
+        double over = stepper.maxTimeFraction();
+        double under = -stepper.minTimeFraction();
         double room = ahead / over;
         if (under > 0) {
             room = Math.min(room, behind / under);
@@ -258,11 +337,14 @@ public final class Simulation implements RunView, AutoCloseable {
         return Math.max(room, 0);
     }
 
-    private StopReason checkFinite() {
+    private StopReason checkFinite(boolean tracers) {
         int i = system.bodies.firstNonFinite();
         if (i >= 0) {
             return new StopReason(StopReason.Kind.NON_FINITE, "non-finite position or velocity of '"
                     + system.bodies.name[i] + "' at " + fmt(system.time()) + " Gyr");
+        }
+        if (!tracers) {
+            return null;
         }
         int j = system.tracers.count > 0 ? system.field.firstNonFinite(system.tracers) : -1;
         if (j >= 0) {
@@ -390,6 +472,10 @@ public final class Simulation implements RunView, AutoCloseable {
         if (s.fixedStep() ? !(s.stepMyr() > 0) : !(s.accuracy() > 0)) {
             throw new IllegalArgumentException(s.fixedStep() ? "step_myr must be positive" : "accuracy must be positive");
         }
+        if (s.scheme() == RunSettings.Scheme.IAS15 && !s.fixedStep() && !(s.accuracy() < 1e-3)) {
+            throw new IllegalArgumentException("accuracy: for ias15 the step-control parameter epsilon must be below 1e-3"
+                    + " (default 1e-9), got " + s.accuracy());
+        }
     }
 
     /** The system being stepped (for tests in this package). */
@@ -397,9 +483,9 @@ public final class Simulation implements RunView, AutoCloseable {
         return system;
     }
 
-    /** The integrator in use. */
-    public Integrator integrator() {
-        return integrator;
+    /** The scheme in use. */
+    public RunSettings.Scheme scheme() {
+        return settings.scheme();
     }
 
     @Override
@@ -411,12 +497,12 @@ public final class Simulation implements RunView, AutoCloseable {
 
     @Override
     public double tGyr() {
-        return system.time();
+        return sampling ? sampleT : system.time();
     }
 
     @Override
     public double scaleFactor() {
-        return history.scaleFactor(system.time());
+        return history.scaleFactor(tGyr());
     }
 
     @Override
@@ -441,32 +527,32 @@ public final class Simulation implements RunView, AutoCloseable {
 
     @Override
     public double[] bodyX() {
-        return system.bodies.x;
+        return sampling ? shown[0] : system.bodies.x;
     }
 
     @Override
     public double[] bodyY() {
-        return system.bodies.y;
+        return sampling ? shown[1] : system.bodies.y;
     }
 
     @Override
     public double[] bodyZ() {
-        return system.bodies.z;
+        return sampling ? shown[2] : system.bodies.z;
     }
 
     @Override
     public double[] bodyVx() {
-        return system.bodies.vx;
+        return sampling ? shown[3] : system.bodies.vx;
     }
 
     @Override
     public double[] bodyVy() {
-        return system.bodies.vy;
+        return sampling ? shown[4] : system.bodies.vy;
     }
 
     @Override
     public double[] bodyVz() {
-        return system.bodies.vz;
+        return sampling ? shown[5] : system.bodies.vz;
     }
 
     @Override

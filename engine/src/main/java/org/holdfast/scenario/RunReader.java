@@ -44,7 +44,13 @@ public final class RunReader {
             throw run.error("step_myr", "give either step_myr (a fixed step) or accuracy (an adaptive step), not both");
         }
         double step = hasStep ? run.positive("step_myr") : Double.NaN;
-        double accuracy = hasStep ? Double.NaN : run.positive("accuracy", DEFAULT_ACCURACY);
+        boolean ias15 = Scheme.IAS15.key().equals(schemeName);
+        double accuracy = hasStep ? Double.NaN
+                : run.positive("accuracy", ias15 ? org.holdfast.integrators.Ias15.DEFAULT_EPSILON : DEFAULT_ACCURACY);
+        if (ias15 && !(accuracy < 1e-3 || Double.isNaN(accuracy))) {
+            throw run.error("accuracy", "for ias15 it is the step-control parameter epsilon (default 1e-9; Rein & Spiegel"
+                    + " 2015), and " + Node.fmt(accuracy) + " would give steps far too long: use 1e-12 to 1e-6");
+        }
         double snap = run.positive("snapshot_every_myr", DEFAULT_SNAPSHOT_MYR);
         boolean de = run.bool("dark_energy_force", true);
         boolean matter = run.bool("background_matter", false);
