@@ -85,7 +85,7 @@ public final class TracerField implements AutoCloseable {
 
     /**
      * Moves every tracer from tA to tB on its own steps against the bodies' dense output: a
-     * tracer takes 2^k steps of Nystr&ouml;m's fourth-order method, the least number whose step is
+     * tracer takes 2^k steps (leapfrog for stars, Nystr&ouml;m's fourth order for flow tracers), the least number whose step is
      * at most eta times its dynamical time (at most 2^{@value #MAX_LEVEL}), so stars deep in a halo step
      * often and flow tracers far out rarely. The bodies' positions and the background
      * coefficient are tabulated once on the finest grid any tracer uses. The accelerations
@@ -172,7 +172,8 @@ public final class TracerField implements AutoCloseable {
     private double[] scratch = new double[0];
 
     /**
-     * Nystr&ouml;m's fourth-order Runge-Kutta method for x'' = f(t, x) with nodes 0, 1/2, 1 and
+     * Stars (tracers with a host) take kick-drift-kick leapfrog steps; flow tracers, which ride
+     * the smooth expansion, take steps of Nystr&ouml;m's fourth-order Runge-Kutta method for x'' = f(t, x) with nodes 0, 1/2, 1 and
      * Simpson's weights (Hairer, N&oslash;rsett &amp; Wanner 1993, Solving ODEs I, sec. II.14):
      * x1 = x + h v + h^2 (k1 + 2 k2) / 6, v1 = v + h (k1 + 4 k2 + k3) / 6, with
      * k2 = f(x + h v / 2 + h^2 k1 / 8) and k3 = f(x + h v + h^2 k2 / 2); k1 of the next step is
@@ -198,6 +199,27 @@ public final class TracerField implements AutoCloseable {
             double k1y = t.ay[j];
             double k1z = t.az[j];
             double fmax = 0;
+            if (t.host[j] >= 0) {
+                // a star: kick-drift-kick leapfrog, symplectic, so its orbit neither gains nor loses
+                // energy over hundreds of orbits (Hairer, Lubich & Wanner 2006, sec. IX.3)
+                for (int m = 1; m <= steps; m++) {
+                    vx += 0.5 * h * k1x;
+                    vy += 0.5 * h * k1y;
+                    vz += 0.5 * h * k1z;
+                    x += h * vx;
+                    y += h * vy;
+                    z += h * vz;
+                    pull(n, m * stride, x, y, z, k, at0);
+                    k1x = k[at0];
+                    k1y = k[at0 + 1];
+                    k1z = k[at0 + 2];
+                    fmax = k[at0 + 3];
+                    vx += 0.5 * h * k1x;
+                    vy += 0.5 * h * k1y;
+                    vz += 0.5 * h * k1z;
+                }
+                steps = 0;
+            }
             for (int m = 0; m < steps; m++) {
                 int base = m * stride;
                 pull(n, base + half, x + 0.5 * h * vx + 0.125 * h2 * k1x, y + 0.5 * h * vy + 0.125 * h2 * k1y,

@@ -19,6 +19,9 @@ interface GalaxyStepper {
     /** The state of the bodies was changed from outside (a merger): start afresh from it. */
     void restart();
 
+    /** Force evaluations so far. */
+    long evaluations();
+
     /** The earliest clock reading inside a step, as a fraction of the step. */
     double minTimeFraction();
 

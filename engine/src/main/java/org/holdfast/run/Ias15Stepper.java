@@ -80,8 +80,8 @@ final class Ias15Stepper implements GalaxyStepper {
         return 1;
     }
 
-    /** Force evaluations so far. */
-    long evaluations() {
+    @Override
+    public long evaluations() {
         return ias.evaluations();
     }
 }

@@ -103,7 +103,8 @@ public final class IntegratorBench implements BenchSuite {
     }
 
     private static String describe(double[] r) {
-        return String.format(Locale.ROOT, "%.4f s, energy error %.2e, %d steps", r[0], r[1], (long) r[3]);
+        return String.format(Locale.ROOT, "%.4f s, energy error %.2e, %d steps, %d force evaluations", r[0], r[1],
+                (long) r[3], (long) r[4]);
     }
 
     /** The 15 members: masses 1e10 to 1e12 Msun, within 800 kpc, 60 km/s random motions, softened by 5 kpc. */
@@ -125,7 +126,8 @@ public final class IntegratorBench implements BenchSuite {
         long t0 = System.nanoTime();
         try (Simulation sim = Simulation.create(group(), s, h, 1)) {
             RunResult r = sim.run(List.of());
-            return new double[] {(System.nanoTime() - t0) * 1e-9, r.maxEnergyResidual(), accuracy, r.steps()};
+            return new double[] {(System.nanoTime() - t0) * 1e-9, r.maxEnergyResidual(), accuracy, r.steps(),
+                sim.forceEvaluations()};
         }
     }
 
@@ -161,6 +163,7 @@ public final class IntegratorBench implements BenchSuite {
         double[] x = new double[N];
         double[] yy = new double[N];
         double[] z = new double[N];
+        long[] evaluations = {0};
         FirstOrderDifferentialEquations ode = new FirstOrderDifferentialEquations() {
             @Override
             public int getDimension() {
@@ -170,6 +173,7 @@ public final class IntegratorBench implements BenchSuite {
             @Override
             public void computeDerivatives(double t, double[] y, double[] dy) {
                 double k = h.darkEnergyAcceleration(t);
+                evaluations[0]++;
                 java.util.Arrays.fill(ax, 0);
                 java.util.Arrays.fill(ay, 0);
                 java.util.Arrays.fill(az, 0);
@@ -218,7 +222,7 @@ public final class IntegratorBench implements BenchSuite {
         });
         double[] y = y0.clone();
         dp.integrate(ode, 0, y0, UNTIL_GYR, y);
-        return new double[] {(System.nanoTime() - t0) * 1e-9, worst[0], tol, steps[0]};
+        return new double[] {(System.nanoTime() - t0) * 1e-9, worst[0], tol, steps[0], evaluations[0]};
     }
 
     private static double pairEnergy(double[] y, double[] m, double[] eps2) {

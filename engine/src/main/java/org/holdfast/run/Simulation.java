@@ -1,31 +1,21 @@
 package org.holdfast.run;
 
-import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 
 import org.holdfast.expansion.ExpansionHistory;
-import org.holdfast.forces.BackgroundTide;
-import org.holdfast.forces.Bodies;
-import org.holdfast.forces.CoulombLog;
-import org.holdfast.forces.DynamicalFriction;
-import org.holdfast.forces.KernelTable;
-import org.holdfast.forces.PairGravity;
-import org.holdfast.forces.TracerField;
 import org.holdfast.forces.Tracers;
-import org.holdfast.group.GalaxySpec;
 import org.holdfast.group.GroupSpec;
-import org.holdfast.group.StarsSpec;
-import org.holdfast.halos.HaloProfile;
-import org.holdfast.halos.Halos;
 import org.holdfast.integrators.Integrator;
 import org.holdfast.units.Units;
 
 /**
- * One galaxy group evolved in an expanding background. {@link #create} moves the group to its
- * centre-of-mass frame, builds the halos, the pair kernels and the tracers; {@link #run} steps
- * it from the start to the end time, landing exactly on every snapshot time, and tells the
- * observers. The simulation is its own {@link RunView}.
+ * One galaxy group evolved in an expanding background: the loop. {@link RunBuilder} builds it
+ * (centre-of-mass frame, halos, pair kernels, tracers); {@link #run} steps the bodies with the
+ * scheme's {@link GalaxyStepper} from the start to the end time without ever shortening a step
+ * for an output: snapshots inside a step sample its dense output, mergers are located on it as
+ * events, and the tracers follow on their own steps. The simulation is its own {@link RunView}
+ * (during a snapshot inside a step, the view shows the sampled bodies).
  *
  * <p>Energy residual: |E(t) - E(0)| / max(|W(0)|, T(t)), the budget's drift relative to the
  * group's initial pair binding energy (with a single body, relative to K(0) + |U(0)|), or to the
@@ -63,7 +53,7 @@ public final class Simulation implements RunView, AutoCloseable {
     private double residual;
     private volatile boolean cancelled;
 
-    private Simulation(RunSettings settings, ExpansionHistory history, GroupSystem system, double[] offset,
+    Simulation(RunSettings settings, ExpansionHistory history, GroupSystem system, double[] offset,
             double[] velocity) {
         this.settings = settings;
         this.history = history;
@@ -98,47 +88,7 @@ public final class Simulation implements RunView, AutoCloseable {
      * @throws IllegalArgumentException for an unphysical member, naming it and the key
      */
     public static Simulation create(GroupSpec group, RunSettings settings, ExpansionHistory history, int threads) {
-        checkSettings(settings);
-        List<GalaxySpec> gs = group.galaxies();
-        List<HaloProfile> halos = new ArrayList<>();
-        for (GalaxySpec g : gs) {
-            try {
-                halos.add(Halos.build(g.halo(), g.massMsun(), history.criticalDensityToday()));
-                checkStars(g.stars());
-            } catch (IllegalArgumentException e) {
-                throw new IllegalArgumentException("galaxy '" + g.name() + "': " + e.getMessage(), e);
-            }
-        }
-        KernelTable table = new KernelTable();
-        int[] shapes = table.addAll(halos);
-        Bodies bodies = new Bodies(gs.size());
-        double[] cm = new double[3];
-        double[] cv = new double[3];
-        centreOfMass(gs, halos, cm, cv);
-        for (int i = 0; i < gs.size(); i++) {
-            GalaxySpec g = gs.get(i);
-            double[] pos = new double[3];
-            double[] vel = new double[3];
-            for (int k = 0; k < 3; k++) {
-                pos[k] = g.positionKpc()[k] - cm[k];
-                vel[k] = Units.kmsToKpcPerGyr(g.velocityKms()[k]) - cv[k];
-            }
-            bodies.add(g.name(), halos.get(i), shapes[i], pos, vel);
-        }
-        Tracers tracers = seedTracers(group, bodies, settings, history);
-        BackgroundTide tide = new BackgroundTide(history, settings.darkEnergyForce(), settings.backgroundMatter());
-        DynamicalFriction friction = settings.dynamicalFriction() ? friction(gs, bodies, settings) : null;
-        GroupSystem system = new GroupSystem(bodies, tracers, new PairGravity(table), tide,
-                new TracerField(threads), friction, settings.startGyr());
-        system.updateAccelerations();
-        if (tracers.count > 0) {
-            system.field.accelerate(tracers, bodies, tide.coefficient(settings.startGyr()));
-        }
-        Simulation sim = new Simulation(settings, history, system, cm, cv);
-        sim.energy0 = system.energyBudget();
-        sim.energyNow = sim.energy0;
-        sim.energyScale = energyScale(system);
-        return sim;
+        return RunBuilder.build(group, settings, history, threads);
     }
 
     /**
@@ -281,11 +231,11 @@ public final class Simulation implements RunView, AutoCloseable {
     }
 
     /**
-     * Tracers take steps of at most this fraction of their own dynamical time (about 63 steps of
-     * a fourth-order method per circular orbit): they are for pictures (see the README for the
-     * accuracy measured).
+     * Tracers take steps of at most this fraction of their own dynamical time (about 31 leapfrog
+     * steps per circular orbit of a star): they are for pictures (the README gives the accuracy
+     * measured).
      */
-    static final double TRACER_ETA = 0.1;
+    static final double TRACER_ETA = 0.2;
 
     private double maxResidual;
 
@@ -379,6 +329,13 @@ public final class Simulation implements RunView, AutoCloseable {
                 "stopped at " + fmt(t) + " Gyr, where the expansion history ends");
     }
 
+    /** Sets the budget's reference: the energy now and the scale residuals are measured against. */
+    void startBudget(double scale) {
+        energy0 = system.energyBudget();
+        energyNow = energy0;
+        energyScale = scale;
+    }
+
     /** Asks a running loop to stop after the current step. */
     public void cancel() {
         cancelled = true;
@@ -388,99 +345,14 @@ public final class Simulation implements RunView, AutoCloseable {
         return String.format(Locale.ROOT, "%.6g", t);
     }
 
-    private static double energyScale(GroupSystem s) {
-        double w = Math.abs(s.gravity.energy(s.bodies));
-        if (w > 0) {
-            return w;
-        }
-        double other = s.kineticEnergy() + Math.abs(s.energyBudget() - s.kineticEnergy());
-        return other > 0 ? other : 1;
-    }
-
-    private static void centreOfMass(List<GalaxySpec> gs, List<HaloProfile> halos, double[] cm, double[] cv) {
-        double total = 0;
-        for (int i = 0; i < gs.size(); i++) {
-            double m = halos.get(i).mass();
-            total += m;
-            for (int k = 0; k < 3; k++) {
-                cm[k] += m * gs.get(i).positionKpc()[k];
-                cv[k] += m * Units.kmsToKpcPerGyr(gs.get(i).velocityKms()[k]);
-            }
-        }
-        for (int k = 0; k < 3; k++) {
-            cm[k] /= total;
-            cv[k] /= total;
-        }
-    }
-
-    private static Tracers seedTracers(GroupSpec group, Bodies bodies, RunSettings settings, ExpansionHistory h) {
-        long count = group.tracerCount();
-        if (count > Integer.MAX_VALUE - 8) {
-            throw new IllegalArgumentException("count: " + count + " tracers is more than one run can hold");
-        }
-        Tracers t = new Tracers((int) count);
-        int at = 0;
-        List<GalaxySpec> gs = group.galaxies();
-        for (int i = 0; i < gs.size(); i++) {
-            StarsSpec s = gs.get(i).stars();
-            if (s == null || s.count() == 0) {
-                continue;
-            }
-            double[] pos = {bodies.x[i], bodies.y[i], bodies.z[i]};
-            double[] vel = {bodies.vx[i], bodies.vy[i], bodies.vz[i]};
-            if ("disk".equals(s.shape())) {
-                TracerSeeding.disk(t, at, i, s, bodies.halo[i], pos, vel, settings.seed(), i);
-            } else {
-                TracerSeeding.sphere(t, at, i, s, bodies.halo[i], pos, vel, settings.seed(), i);
-            }
-            at += s.count();
-        }
-        if (group.flow() != null && group.flow().count() > 0) {
-            TracerSeeding.flow(t, at, group.flow(), h.hubbleRate(settings.startGyr()), settings.seed(), gs.size());
-        }
-        return t;
-    }
-
-    private static DynamicalFriction friction(List<GalaxySpec> gs, Bodies bodies, RunSettings settings) {
-        java.util.Map<String, CoulombLog> own = new java.util.HashMap<>();
-        for (GalaxySpec g : gs) {
-            if (g.coulombLog() != null) {
-                own.put(g.name(), g.coulombLog());
-            }
-        }
-        DynamicalFriction f = new DynamicalFriction(settings.coulombLog(), own);
-        f.refresh(bodies);
-        return f;
-    }
-
-    private static void checkStars(StarsSpec s) {
-        if (s == null) {
-            return;
-        }
-        if (!StarsSpec.SHAPES.contains(s.shape())) {
-            throw new IllegalArgumentException("stars.shape: unknown shape '" + s.shape() + "' (one of " + StarsSpec.SHAPES + ")");
-        }
-        if (!(s.radiusKpc() > 0)) {
-            throw new IllegalArgumentException("stars.radius_kpc must be positive, got " + s.radiusKpc());
-        }
-        if ("disk".equals(s.shape())) {
-            TracerSeeding.unit(s.normal());
-        }
-    }
-
-    private static void checkSettings(RunSettings s) {
-        if (s.fixedStep() ? !(s.stepMyr() > 0) : !(s.accuracy() > 0)) {
-            throw new IllegalArgumentException(s.fixedStep() ? "step_myr must be positive" : "accuracy must be positive");
-        }
-        if (s.scheme() == RunSettings.Scheme.IAS15 && !s.fixedStep() && !(s.accuracy() < 1e-3)) {
-            throw new IllegalArgumentException("accuracy: for ias15 the step-control parameter epsilon must be below 1e-3"
-                    + " (default 1e-9), got " + s.accuracy());
-        }
-    }
-
     /** The system being stepped (for tests in this package). */
     GroupSystem system() {
         return system;
+    }
+
+    /** Force evaluations of the bodies so far (IAS15's iterations included; trial steps of the step chooser not). */
+    public long forceEvaluations() {
+        return stepper.evaluations();
     }
 
     /** The scheme in use. */

@@ -21,6 +21,7 @@ final class SplitStepper implements GalaxyStepper {
     private final double[] pos;
     private final double[] vel;
     private final double[] acc;
+    private long evaluations;
 
     SplitStepper(GroupSystem system, Integrator integrator, double accuracy, double fixedStepGyr) {
         this.system = system;
@@ -70,8 +71,14 @@ final class SplitStepper implements GalaxyStepper {
         }
         record(true);
         integrator.step(system, h);
+        evaluations += integrator.stages();
         record(false);
         return h;
+    }
+
+    @Override
+    public long evaluations() {
+        return evaluations;
     }
 
     @Override
