@@ -18,8 +18,8 @@ final class Ias15Stepper implements GalaxyStepper {
     private final double[] pos;
     private final double[] vel;
     private final double fixedStep;
-    private final double tidal0;
-    private final double drag0;
+    private double tidal0;
+    private double drag0;
 
     /**
      * @param epsilon IAS15's step-control parameter
@@ -32,13 +32,15 @@ final class Ias15Stepper implements GalaxyStepper {
         this.ias = new Ias15(cap, 2, Double.isNaN(fixedStepGyr) ? epsilon : 0);
         this.pos = new double[cap];
         this.vel = new double[cap];
-        this.tidal0 = system.tidalWork();
-        this.drag0 = system.frictionWork();
         restart();
     }
 
     @Override
     public void restart() {
+        // the budget's work integrals may have been set from outside (cut back to a merger)
+        double[] q = ias.integrals();
+        tidal0 = system.tidalWork() - q[0];
+        drag0 = system.frictionWork() - q[1];
         system.copyOut(pos, vel);
         ias.reset(system.time(), system.size(), pos, vel);
         if (ias.nextStep() == 0 && Double.isNaN(fixedStep)) {

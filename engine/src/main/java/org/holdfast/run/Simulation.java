@@ -6,6 +6,7 @@ import java.util.Locale;
 import org.holdfast.expansion.ExpansionHistory;
 import org.holdfast.forces.Tracers;
 import org.holdfast.group.GroupSpec;
+import org.holdfast.integrators.DenseOutput;
 import org.holdfast.integrators.Integrator;
 import org.holdfast.units.Units;
 
@@ -36,6 +37,8 @@ public final class Simulation implements RunView, AutoCloseable {
     /** Null when members do not merge. */
     private final MergerEvents mergerEvents;
     private double tracerTime;
+    private double workBefore;
+    private double dragBefore;
     /** While an output inside a step is shown: the time and the bodies sampled there. */
     private boolean sampling;
     private double sampleT;
@@ -129,6 +132,8 @@ public final class Simulation implements RunView, AutoCloseable {
             double toEnd = end - t;
             double room = historyRoom(t, Math.signum(toEnd));
             double limit = room < Math.abs(toEnd) ? Math.copySign(room, toEnd) : toEnd;
+            workBefore = system.tidalWork();
+            dragBefore = system.frictionWork();
             double h = limit == 0 ? 0 : stepper.step(limit);
             if (h == 0) {
                 reason = new StopReason(StopReason.Kind.NON_FINITE,
@@ -206,7 +211,13 @@ public final class Simulation implements RunView, AutoCloseable {
     /** The located merger: the bodies set to the interpolant at t, the tracers brought there, then the merge. */
     private void mergeAt(double t) {
         advanceTracers(stepper.dense(), t);
-        stepper.dense().sample(t, sampleX, sampleV);
+        DenseOutput d = stepper.dense();
+        d.sample(t, sampleX, sampleV);
+        // the work integrals back to t, in proportion to the part of the step taken (error of
+        // second order in the step on a small term: the step is cut at the merger)
+        double frac = d.stepEnd() == d.stepStart() ? 1 : (t - d.stepStart()) / (d.stepEnd() - d.stepStart());
+        system.setWorkIntegrals(workBefore + frac * (system.tidalWork() - workBefore),
+                dragBefore + frac * (system.frictionWork() - dragBefore));
         system.copyIn(t, sampleX, sampleV);
         mergers.merge(system, mergerEvents.first(), mergerEvents.second());
         afterMerger();
@@ -221,7 +232,7 @@ public final class Simulation implements RunView, AutoCloseable {
     }
 
     /** Moves the tracers from where they are to time t along the last step of the bodies. */
-    private void advanceTracers(org.holdfast.integrators.DenseOutput path, double t) {
+    private void advanceTracers(DenseOutput path, double t) {
         if (system.tracers.count == 0 || t == tracerTime) {
             return;
         }
