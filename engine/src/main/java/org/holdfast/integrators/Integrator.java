@@ -31,6 +31,7 @@ public interface Integrator {
         return switch (scheme) {
             case LEAPFROG -> new Leapfrog();
             case YOSHIDA4 -> new Yoshida4();
+            case IAS15 -> throw new IllegalArgumentException("ias15 is not a splitting scheme: use Ias15");
         };
     }
 }

@@ -7,6 +7,7 @@ import org.holdfast.forces.DynamicalFriction;
 import org.holdfast.forces.PairGravity;
 import org.holdfast.forces.TracerField;
 import org.holdfast.forces.Tracers;
+import org.holdfast.integrators.SecondOrderSystem;
 import org.holdfast.integrators.TrialSystem;
 
 /**
@@ -20,8 +21,17 @@ import org.holdfast.integrators.TrialSystem;
  * <p>With dynamical friction the budget also subtracts the work the drag has done (counted in
  * each kick), and it adds back the orbital energy that mergers took out of the pair sum, so a
  * budget that stays constant means the integration, not the physics, is accurate.
+ *
+ * <p>For {@link org.holdfast.integrators.Ias15} the same forces are a {@link SecondOrderSystem}
+ * over the coordinates x..., y..., z... of the bodies, and the two work integrals are its extra
+ * rates: the explicit time derivative of the tidal potential, -(1/2) c'(t) sum m r^2, and the
+ * power of the drag, sum m f . v; the integrator's Radau quadrature integrates them on the
+ * orbit itself (exact for polynomials of degree 14 in time).
+ *
+ * <p>Tracers move with the bodies' kicks and drifts only when {@link #tracersAlong} is set; the
+ * run integrates them on their own steps against the bodies' dense output.
  */
-final class GroupSystem implements TrialSystem {
+final class GroupSystem implements TrialSystem, SecondOrderSystem {
 
     private static final double[] GL_NODES = {-Math.sqrt(0.6), 0, Math.sqrt(0.6)};
     private static final double[] GL_WEIGHTS = {5.0 / 9, 8.0 / 9, 5.0 / 9};
@@ -45,6 +55,10 @@ final class GroupSystem implements TrialSystem {
     private double mergerEnergy;
     /** Energy budget change booked by tidal stripping (run.Stripping). */
     private double strippedEnergy;
+    /** Whether kicks, drifts and force updates move the tracers too (off: they are stepped on their own). */
+    boolean tracersAlong;
+    private final CompensatedSum kinetic = new CompensatedSum();
+    private final CompensatedSum budget = new CompensatedSum();
 
     GroupSystem(Bodies bodies, Tracers tracers, PairGravity gravity, BackgroundTide tide, TracerField field,
             DynamicalFriction friction, double startGyr) {
@@ -79,7 +93,7 @@ final class GroupSystem implements TrialSystem {
             b.vy[i] += h * b.ay[i];
             b.vz[i] += h * b.az[i];
         }
-        if (!trial && tracers.count > 0) {
+        if (!trial && tracersAlong && tracers.count > 0) {
             field.kick(tracers, h);
         }
     }
@@ -95,7 +109,7 @@ final class GroupSystem implements TrialSystem {
             b.y[i] += h * b.vy[i];
             b.z[i] += h * b.vz[i];
         }
-        if (!trial && tracers.count > 0) {
+        if (!trial && tracersAlong && tracers.count > 0) {
             field.drift(tracers, h);
         }
         t += h;
@@ -135,7 +149,7 @@ final class GroupSystem implements TrialSystem {
         if (friction != null) {
             friction.accelerate(b);
         }
-        if (!trial && tracers.count > 0) {
+        if (!trial && tracersAlong && tracers.count > 0) {
             field.accelerate(tracers, b, c);
         }
     }
@@ -185,9 +199,106 @@ final class GroupSystem implements TrialSystem {
         trial = false;
     }
 
+    // ---- as a second-order system, for IAS15 ----
+
+    @Override
+    public int size() {
+        return 3 * bodies.count();
+    }
+
+    @Override
+    public int rateCount() {
+        return 2;
+    }
+
+    @Override
+    public void evaluate(double time, double[] pos, double[] vel, double[] acc, double[] rates) {
+        Bodies b = bodies;
+        int n = b.count();
+        System.arraycopy(pos, 0, b.x, 0, n);
+        System.arraycopy(pos, n, b.y, 0, n);
+        System.arraycopy(pos, 2 * n, b.z, 0, n);
+        System.arraycopy(vel, 0, b.vx, 0, n);
+        System.arraycopy(vel, n, b.vy, 0, n);
+        System.arraycopy(vel, 2 * n, b.vz, 0, n);
+        t = time;
+        java.util.Arrays.fill(b.ax, 0, n, 0);
+        java.util.Arrays.fill(b.ay, 0, n, 0);
+        java.util.Arrays.fill(b.az, 0, n, 0);
+        gravity.accelerate(b);
+        double work = 0;
+        if (tide.active()) {
+            double c = tide.coefficient(time);
+            if (c != 0) {
+                tide.accelerate(b, c);
+            }
+            double q = 0;
+            for (int i = 0; i < n; i++) {
+                q += b.mass[i] * (b.x[i] * b.x[i] + b.y[i] * b.y[i] + b.z[i] * b.z[i]);
+            }
+            work = -0.5 * tide.rate(time) * q;
+        }
+        double power = 0;
+        if (friction != null) {
+            System.arraycopy(b.ax, 0, acc, 0, n);
+            System.arraycopy(b.ay, 0, acc, n, n);
+            System.arraycopy(b.az, 0, acc, 2 * n, n);
+            friction.accelerate(b);
+            for (int i = 0; i < n; i++) {
+                power += b.mass[i] * ((b.ax[i] - acc[i]) * b.vx[i] + (b.ay[i] - acc[n + i]) * b.vy[i]
+                        + (b.az[i] - acc[2 * n + i]) * b.vz[i]);
+            }
+        }
+        System.arraycopy(b.ax, 0, acc, 0, n);
+        System.arraycopy(b.ay, 0, acc, n, n);
+        System.arraycopy(b.az, 0, acc, 2 * n, n);
+        rates[0] = work;
+        rates[1] = power;
+    }
+
+    /** Copies the bodies' positions and velocities into flat x..., y..., z... arrays. */
+    void copyOut(double[] pos, double[] vel) {
+        Bodies b = bodies;
+        int n = b.count();
+        System.arraycopy(b.x, 0, pos, 0, n);
+        System.arraycopy(b.y, 0, pos, n, n);
+        System.arraycopy(b.z, 0, pos, 2 * n, n);
+        System.arraycopy(b.vx, 0, vel, 0, n);
+        System.arraycopy(b.vy, 0, vel, n, n);
+        System.arraycopy(b.vz, 0, vel, 2 * n, n);
+    }
+
+    /** Sets the state from flat arrays and the clock (the integrator's state after a step). */
+    void copyIn(double time, double[] pos, double[] vel) {
+        Bodies b = bodies;
+        int n = b.count();
+        System.arraycopy(pos, 0, b.x, 0, n);
+        System.arraycopy(pos, n, b.y, 0, n);
+        System.arraycopy(pos, 2 * n, b.z, 0, n);
+        System.arraycopy(vel, 0, b.vx, 0, n);
+        System.arraycopy(vel, n, b.vy, 0, n);
+        System.arraycopy(vel, 2 * n, b.vz, 0, n);
+        t = time;
+    }
+
+    /**
+     * Sets the two work integrals from their totals since the start (the integrator's
+     * quadrature), on top of what split steps had accumulated before.
+     */
+    void setWorkIntegrals(double tidal, double drag) {
+        work.set(tidal);
+        frictionWork.set(drag);
+    }
+
+    /** The tidal work so far. */
+    double tidalWork() {
+        return work.value();
+    }
+
     /** Kinetic energy of the bodies, Msun kpc^2/Gyr^2. */
     double kineticEnergy() {
-        CompensatedSum k = new CompensatedSum();
+        CompensatedSum k = kinetic;
+        k.set(0);
         Bodies b = bodies;
         for (int i = 0; i < b.count(); i++) {
             k.add(0.5 * b.mass[i] * (b.vx[i] * b.vx[i] + b.vy[i] * b.vy[i] + b.vz[i] * b.vz[i]));
@@ -210,8 +321,10 @@ final class GroupSystem implements TrialSystem {
     }
 
     double energyBudget() {
-        CompensatedSum e = new CompensatedSum();
-        e.add(kineticEnergy());
+        double kin = kineticEnergy();
+        CompensatedSum e = budget;
+        e.set(0);
+        e.add(kin);
         e.add(gravity.energy(bodies));
         if (tide.active()) {
             e.add(-0.5 * tide.coefficient(t) * BackgroundTide.secondMoment(bodies));

@@ -47,7 +47,7 @@ final class Mergers {
         return Math.max(Halos.tenthMassRadius(a), Halos.tenthMassRadius(b));
     }
 
-    private double distanceFor(HaloProfile a, HaloProfile b) {
+    double distanceFor(HaloProfile a, HaloProfile b) {
         if (!Double.isNaN(fixedKpc)) {
             return fixedKpc;
         }

@@ -17,7 +17,8 @@ public interface RunObserver {
 
     /**
      * At each snapshot time: the start, every {@code snapshotEveryMyr}, and the final state.
-     * The loop ends a step exactly on each of these times.
+     * No step is shortened to land there: inside a step the view shows the bodies sampled from
+     * the step's interpolant at the snapshot time (and the tracers stepped there).
      */
     default void atSnapshot(RunView run) {
     }

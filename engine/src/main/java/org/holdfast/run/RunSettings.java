@@ -52,7 +52,9 @@ public record RunSettings(double startGyr, double untilGyr, Scheme scheme, doubl
         /** Kick-drift-kick leapfrog, second order. */
         LEAPFROG("leapfrog"),
         /** Yoshida's fourth-order composition of leapfrogs (Yoshida 1990, Phys. Lett. A 150, 262). */
-        YOSHIDA4("yoshida4");
+        YOSHIDA4("yoshida4"),
+        /** IAS15, 15th-order Gauss-Radau with its own step control (Rein &amp; Spiegel 2015, MNRAS 446, 1424). */
+        IAS15("ias15");
 
         private final String key;
 

@@ -1,32 +1,22 @@
 package org.holdfast.run;
 
-import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 
 import org.holdfast.expansion.ExpansionHistory;
-import org.holdfast.forces.BackgroundTide;
-import org.holdfast.forces.Bodies;
-import org.holdfast.forces.CoulombLog;
-import org.holdfast.forces.DynamicalFriction;
-import org.holdfast.forces.KernelTable;
-import org.holdfast.forces.PairGravity;
-import org.holdfast.forces.TracerField;
 import org.holdfast.forces.Tracers;
-import org.holdfast.group.GalaxySpec;
 import org.holdfast.group.GroupSpec;
-import org.holdfast.group.StarsSpec;
-import org.holdfast.halos.HaloProfile;
-import org.holdfast.halos.Halos;
+import org.holdfast.integrators.DenseOutput;
 import org.holdfast.integrators.Integrator;
-import org.holdfast.integrators.SymmetricStepSize;
 import org.holdfast.units.Units;
 
 /**
- * One galaxy group evolved in an expanding background. {@link #create} moves the group to its
- * centre-of-mass frame, builds the halos, the pair kernels and the tracers; {@link #run} steps
- * it from the start to the end time, landing exactly on every snapshot time, and tells the
- * observers. The simulation is its own {@link RunView}.
+ * One galaxy group evolved in an expanding background: the loop. {@link RunBuilder} builds it
+ * (centre-of-mass frame, halos, pair kernels, tracers); {@link #run} steps the bodies with the
+ * scheme's {@link GalaxyStepper} from the start to the end time without ever shortening a step
+ * for an output: snapshots inside a step sample its dense output, mergers are located on it as
+ * events, and the tracers follow on their own steps. The simulation is its own {@link RunView}
+ * (during a snapshot inside a step, the view shows the sampled bodies).
  *
  * <p>Energy residual: |E(t) - E(0)| / max(|W(0)|, T(t)), the budget's drift relative to the
  * group's initial pair binding energy (with a single body, relative to K(0) + |U(0)|), or to the
@@ -43,8 +33,18 @@ public final class Simulation implements RunView, AutoCloseable {
     private final RunSettings settings;
     private final ExpansionHistory history;
     private final GroupSystem system;
-    private final Integrator integrator;
-    private final SymmetricStepSize stepSize;
+    private final GalaxyStepper stepper;
+    /** Null when members do not merge. */
+    private final MergerEvents mergerEvents;
+    private double tracerTime;
+    private double workBefore;
+    private double dragBefore;
+    /** While an output inside a step is shown: the time and the bodies sampled there. */
+    private boolean sampling;
+    private double sampleT;
+    private final double[] sampleX;
+    private final double[] sampleV;
+    private final double[][] shown;
     private final double[] frameOffset;
     private final double[] frameVelocity;
     /** Null when members do not merge (a backward run, or merge_within_kpc = 0). */
@@ -58,18 +58,28 @@ public final class Simulation implements RunView, AutoCloseable {
     private double residual;
     private volatile boolean cancelled;
 
-    private Simulation(RunSettings settings, ExpansionHistory history, GroupSystem system, double[] offset,
+    Simulation(RunSettings settings, ExpansionHistory history, GroupSystem system, double[] offset,
             double[] velocity) {
         this.settings = settings;
         this.history = history;
         this.system = system;
-        this.integrator = Integrator.of(settings.scheme());
-        this.stepSize = settings.fixedStep() ? null : new SymmetricStepSize(settings.accuracy(), 2);
+        double fixed = settings.fixedStep() ? settings.stepMyr() * Units.MYR : Double.NaN;
+        this.stepper = settings.scheme() == RunSettings.Scheme.IAS15
+                ? new Ias15Stepper(system, settings.accuracy(), fixed)
+                : new SplitStepper(system, Integrator.of(settings.scheme()), settings.accuracy(), fixed);
         this.frameOffset = offset;
         this.frameVelocity = velocity;
         this.mergers = settings.mergers()
                 ? new Mergers(settings.mergeWithinKpc(), history, settings.darkEnergyForce()) : null;
         this.stripping = settings.dynamicalFriction() ? new Stripping() : null;
+        this.mergerEvents = mergers == null ? null
+                : new MergerEvents(mergers, history, settings.darkEnergyForce(), system.bodies.x.length);
+        int cap = 3 * system.bodies.x.length;
+        this.sampleX = new double[cap];
+        this.sampleV = new double[cap];
+        int n = system.bodies.x.length;
+        this.shown = new double[6][n];
+        this.tracerTime = settings.startGyr();
     }
 
     /** A simulation using every core for the tracers. */
@@ -84,44 +94,7 @@ public final class Simulation implements RunView, AutoCloseable {
      * @throws IllegalArgumentException for an unphysical member, naming it and the key
      */
     public static Simulation create(GroupSpec group, RunSettings settings, ExpansionHistory history, int threads) {
-        checkSettings(settings);
-        List<GalaxySpec> gs = group.galaxies();
-        List<HaloProfile> halos = new ArrayList<>();
-        for (GalaxySpec g : gs) {
-            try {
-                halos.add(Halos.build(g.halo(), g.massMsun(), history.criticalDensityToday()));
-                checkStars(g.stars());
-            } catch (IllegalArgumentException e) {
-                throw new IllegalArgumentException("galaxy '" + g.name() + "': " + e.getMessage(), e);
-            }
-        }
-        KernelTable table = new KernelTable();
-        int[] shapes = table.addAll(halos);
-        Bodies bodies = new Bodies(gs.size());
-        double[] cm = new double[3];
-        double[] cv = new double[3];
-        centreOfMass(gs, halos, cm, cv);
-        for (int i = 0; i < gs.size(); i++) {
-            GalaxySpec g = gs.get(i);
-            double[] pos = new double[3];
-            double[] vel = new double[3];
-            for (int k = 0; k < 3; k++) {
-                pos[k] = g.positionKpc()[k] - cm[k];
-                vel[k] = Units.kmsToKpcPerGyr(g.velocityKms()[k]) - cv[k];
-            }
-            bodies.add(g.name(), halos.get(i), shapes[i], pos, vel);
-        }
-        Tracers tracers = seedTracers(group, bodies, settings, history);
-        BackgroundTide tide = new BackgroundTide(history, settings.darkEnergyForce(), settings.backgroundMatter());
-        DynamicalFriction friction = settings.dynamicalFriction() ? friction(gs, bodies, settings) : null;
-        GroupSystem system = new GroupSystem(bodies, tracers, new PairGravity(table), tide,
-                new TracerField(threads), friction, settings.startGyr());
-        Simulation sim = new Simulation(settings, history, system, cm, cv);
-        system.updateAccelerations();
-        sim.energy0 = system.energyBudget();
-        sim.energyNow = sim.energy0;
-        sim.energyScale = energyScale(system);
-        return sim;
+        return RunBuilder.build(group, settings, history, threads);
     }
 
     /**
@@ -134,7 +107,12 @@ public final class Simulation implements RunView, AutoCloseable {
         return group.tracerCount() * Tracers.BYTES_PER_TRACER + n * BYTES_PER_BODY + tables;
     }
 
-    /** Steps from startGyr to untilGyr, calling the observers; returns why and how it stopped. */
+    /**
+     * Steps from startGyr to untilGyr, calling the observers; returns why and how it stopped.
+     * No step is shortened to land on a snapshot time: snapshots inside a step sample its dense
+     * output (the bodies) and bring the tracers to that time on their own steps, so the snapshot
+     * interval does not change the bodies' trajectory. Mergers are located on the dense output.
+     */
     public RunResult run(List<RunObserver> observers) {
         long wall0 = System.nanoTime();
         double start = settings.startGyr();
@@ -145,37 +123,57 @@ public final class Simulation implements RunView, AutoCloseable {
         SnapshotClock clock = SnapshotClock.of(start, end, every, history);
         observers.forEach(o -> o.init(this));
         snapshot(observers);
+        double nextOut = clock.next(start);
+        double dir = Math.signum(end - start);
         StopReason reason = null;
         while (reason == null && system.time() != end) {
             if (cancelled) {
                 reason = new StopReason(StopReason.Kind.CANCELLED, "cancelled at " + fmt(system.time()) + " Gyr");
                 break;
             }
-            double target = clock.next(system.time());
-            double h = chooseStep(target);
+            double t = system.time();
+            double toEnd = end - t;
+            double room = historyRoom(t, Math.signum(toEnd));
+            double limit = room < Math.abs(toEnd) ? Math.copySign(room, toEnd) : toEnd;
+            workBefore = system.tidalWork();
+            dragBefore = system.frictionWork();
+            double h = limit == 0 ? 0 : stepper.step(limit);
             if (h == 0) {
                 reason = new StopReason(StopReason.Kind.NON_FINITE,
                         "step size fell to zero at " + fmt(system.time()) + " Gyr");
                 break;
             }
-            double before = system.time();
-            integrator.step(system, h);
             steps++;
-            // a step chosen to land on the target lands there exactly, whatever the sum of sub-steps rounds to
-            boolean onTarget = h == target - before;
-            if (onTarget) {
-                system.setTime(target);
+            if (h == toEnd) {
+                system.setTime(end);
             }
-            reason = checkFinite();
+            reason = checkFinite(false);
             if (reason != null) {
                 break;
             }
-            if (mergers != null && mergers.check(system)) {
-                updateEnergy();
+            double stepEnd = system.time();
+            double event = mergerEvents == null ? Double.NaN : mergerEvents.locate(system.bodies, stepper.dense(), t, stepEnd);
+            double upTo = Double.isNaN(event) ? stepEnd : event;
+            while (dir * (nextOut - upTo) < 0 || (nextOut == upTo && !Double.isNaN(event))) {
+                showSampled(observers, nextOut);
+                nextOut = clock.next(nextOut);
             }
-            // tidal stripping of satellites (run.Stripping), between steps like mergers
+            if (!Double.isNaN(event)) {
+                mergeAt(event);
+            } else {
+                advanceTracers(stepper.dense(), stepEnd);
+                if (mergerEvents != null && mergerEvents.anyInside() && mergers.check(system)) {
+                    afterMerger();
+                }
+            }
+            reason = checkFinite(true);
+            if (reason != null) {
+                break;
+            }
+            // tidal stripping of satellites (run.Stripping), between steps like mergers: the masses
+            // changed, so the integrator's predictor starts afresh as after a merger
             if (stripping != null && stripping.apply(system, mergers)) {
-                updateEnergy();
+                afterMerger();
             }
             if (system.bodies.count() <= 64) {
                 updateEnergy();
@@ -183,8 +181,9 @@ public final class Simulation implements RunView, AutoCloseable {
             for (RunObserver o : observers) {
                 o.afterStep(this);
             }
-            if (onTarget && system.time() != end) {
+            if (nextOut == system.time() && system.time() != end) {
                 snapshot(observers);
+                nextOut = clock.next(nextOut);
             }
         }
         if (reason == null) {
@@ -196,6 +195,66 @@ public final class Simulation implements RunView, AutoCloseable {
         }
         return new RunResult(reason, system.time(), steps, (System.nanoTime() - wall0) * 1e-9, maxResidual);
     }
+
+    /** A snapshot at time t inside the last step: the bodies from its interpolant, the tracers stepped there. */
+    private void showSampled(List<RunObserver> observers, double t) {
+        advanceTracers(stepper.dense(), t);
+        stepper.dense().sample(t, sampleX, sampleV);
+        int n = system.bodies.count();
+        for (int k = 0; k < 3; k++) {
+            System.arraycopy(sampleX, k * n, shown[k], 0, n);
+            System.arraycopy(sampleV, k * n, shown[3 + k], 0, n);
+        }
+        sampleT = t;
+        sampling = true;
+        try {
+            for (RunObserver o : observers) {
+                o.atSnapshot(this);
+            }
+        } finally {
+            sampling = false;
+        }
+    }
+
+    /** The located merger: the bodies set to the interpolant at t, the tracers brought there, then the merge. */
+    private void mergeAt(double t) {
+        advanceTracers(stepper.dense(), t);
+        DenseOutput d = stepper.dense();
+        d.sample(t, sampleX, sampleV);
+        // the work integrals back to t, in proportion to the part of the step taken (error of
+        // second order in the step on a small term: the step is cut at the merger)
+        double frac = d.stepEnd() == d.stepStart() ? 1 : (t - d.stepStart()) / (d.stepEnd() - d.stepStart());
+        system.setWorkIntegrals(workBefore + frac * (system.tidalWork() - workBefore),
+                dragBefore + frac * (system.frictionWork() - dragBefore));
+        system.copyIn(t, sampleX, sampleV);
+        mergers.merge(system, mergerEvents.first(), mergerEvents.second());
+        afterMerger();
+    }
+
+    private void afterMerger() {
+        stepper.restart();
+        if (system.tracers.count > 0) {
+            system.field.accelerate(system.tracers, system.bodies, system.tide.coefficient(system.time()));
+        }
+        updateEnergy();
+    }
+
+    /** Moves the tracers from where they are to time t along the last step of the bodies. */
+    private void advanceTracers(DenseOutput path, double t) {
+        if (system.tracers.count == 0 || t == tracerTime) {
+            return;
+        }
+        system.field.advance(system.tracers, path, system.bodies.count(), system.bodies.halo, system.tide, tracerTime, t,
+                TRACER_ETA);
+        tracerTime = t;
+    }
+
+    /**
+     * Tracers take steps of at most this fraction of their own dynamical time (about 31 leapfrog
+     * steps per circular orbit of a star): they are for pictures (the README gives the accuracy
+     * measured).
+     */
+    static final double TRACER_ETA = 0.2;
 
     private double maxResidual;
 
@@ -221,6 +280,7 @@ public final class Simulation implements RunView, AutoCloseable {
     }
 
     private void snapshot(List<RunObserver> observers) {
+        advanceTracers(stepper.dense(), system.time());
         updateEnergy();
         for (RunObserver o : observers) {
             o.atSnapshot(this);
@@ -233,31 +293,12 @@ public final class Simulation implements RunView, AutoCloseable {
         maxResidual = Math.max(maxResidual, residual);
     }
 
-    /** The signed step toward target: fixed or adaptive, landing on it, every sub-step inside the history. */
-    private double chooseStep(double target) {
-        double t = system.time();
-        double toTarget = target - t;
-        double room = historyRoom(t, Math.signum(toTarget));
-        boolean clipped = room < Math.abs(toTarget);
-        double limit = clipped ? Math.copySign(room, toTarget) : toTarget;
-        double h;
-        if (stepSize == null) {
-            h = Math.copySign(settings.stepMyr() * Units.MYR, limit);
-        } else {
-            h = stepSize.choose(integrator, system, limit);
-        }
-        if (Math.abs(h) >= Math.abs(limit) * (1 - 1e-9)) {
-            h = limit;
-        }
-        return h;
-    }
-
     /** The longest step in direction dir whose sub-steps all stay inside the expansion history. */
     private double historyRoom(double t, double dir) {
         double ahead = dir > 0 ? history.latestGyr() - t : t - history.earliestGyr();
         double behind = dir > 0 ? t - history.earliestGyr() : history.latestGyr() - t;
-        double over = integrator.maxTimeFraction();
-        double under = -integrator.minTimeFraction();
+        double over = stepper.maxTimeFraction();
+        double under = -stepper.minTimeFraction();
         double room = ahead / over;
         if (under > 0) {
             room = Math.min(room, behind / under);
@@ -265,11 +306,14 @@ public final class Simulation implements RunView, AutoCloseable {
         return Math.max(room, 0);
     }
 
-    private StopReason checkFinite() {
+    private StopReason checkFinite(boolean tracers) {
         int i = system.bodies.firstNonFinite();
         if (i >= 0) {
             return new StopReason(StopReason.Kind.NON_FINITE, "non-finite position or velocity of '"
                     + system.bodies.name[i] + "' at " + fmt(system.time()) + " Gyr");
+        }
+        if (!tracers) {
+            return null;
         }
         int j = system.tracers.count > 0 ? system.field.firstNonFinite(system.tracers) : -1;
         if (j >= 0) {
@@ -304,6 +348,13 @@ public final class Simulation implements RunView, AutoCloseable {
                 "stopped at " + fmt(t) + " Gyr, where the expansion history ends");
     }
 
+    /** Sets the budget's reference: the energy now and the scale residuals are measured against. */
+    void startBudget(double scale) {
+        energy0 = system.energyBudget();
+        energyNow = energy0;
+        energyScale = scale;
+    }
+
     /** Asks a running loop to stop after the current step. */
     public void cancel() {
         cancelled = true;
@@ -313,100 +364,19 @@ public final class Simulation implements RunView, AutoCloseable {
         return String.format(Locale.ROOT, "%.6g", t);
     }
 
-    private static double energyScale(GroupSystem s) {
-        double w = Math.abs(s.gravity.energy(s.bodies));
-        if (w > 0) {
-            return w;
-        }
-        double other = s.kineticEnergy() + Math.abs(s.energyBudget() - s.kineticEnergy());
-        return other > 0 ? other : 1;
-    }
-
-    private static void centreOfMass(List<GalaxySpec> gs, List<HaloProfile> halos, double[] cm, double[] cv) {
-        double total = 0;
-        for (int i = 0; i < gs.size(); i++) {
-            double m = halos.get(i).mass();
-            total += m;
-            for (int k = 0; k < 3; k++) {
-                cm[k] += m * gs.get(i).positionKpc()[k];
-                cv[k] += m * Units.kmsToKpcPerGyr(gs.get(i).velocityKms()[k]);
-            }
-        }
-        for (int k = 0; k < 3; k++) {
-            cm[k] /= total;
-            cv[k] /= total;
-        }
-    }
-
-    private static Tracers seedTracers(GroupSpec group, Bodies bodies, RunSettings settings, ExpansionHistory h) {
-        long count = group.tracerCount();
-        if (count > Integer.MAX_VALUE - 8) {
-            throw new IllegalArgumentException("count: " + count + " tracers is more than one run can hold");
-        }
-        Tracers t = new Tracers((int) count);
-        int at = 0;
-        List<GalaxySpec> gs = group.galaxies();
-        for (int i = 0; i < gs.size(); i++) {
-            StarsSpec s = gs.get(i).stars();
-            if (s == null || s.count() == 0) {
-                continue;
-            }
-            double[] pos = {bodies.x[i], bodies.y[i], bodies.z[i]};
-            double[] vel = {bodies.vx[i], bodies.vy[i], bodies.vz[i]};
-            if ("disk".equals(s.shape())) {
-                TracerSeeding.disk(t, at, i, s, bodies.halo[i], pos, vel, settings.seed(), i);
-            } else {
-                TracerSeeding.sphere(t, at, i, s, bodies.halo[i], pos, vel, settings.seed(), i);
-            }
-            at += s.count();
-        }
-        if (group.flow() != null && group.flow().count() > 0) {
-            TracerSeeding.flow(t, at, group.flow(), h.hubbleRate(settings.startGyr()), settings.seed(), gs.size());
-        }
-        return t;
-    }
-
-    private static DynamicalFriction friction(List<GalaxySpec> gs, Bodies bodies, RunSettings settings) {
-        java.util.Map<String, CoulombLog> own = new java.util.HashMap<>();
-        for (GalaxySpec g : gs) {
-            if (g.coulombLog() != null) {
-                own.put(g.name(), g.coulombLog());
-            }
-        }
-        DynamicalFriction f = new DynamicalFriction(settings.coulombLog(), own);
-        f.refresh(bodies);
-        return f;
-    }
-
-    private static void checkStars(StarsSpec s) {
-        if (s == null) {
-            return;
-        }
-        if (!StarsSpec.SHAPES.contains(s.shape())) {
-            throw new IllegalArgumentException("stars.shape: unknown shape '" + s.shape() + "' (one of " + StarsSpec.SHAPES + ")");
-        }
-        if (!(s.radiusKpc() > 0)) {
-            throw new IllegalArgumentException("stars.radius_kpc must be positive, got " + s.radiusKpc());
-        }
-        if ("disk".equals(s.shape())) {
-            TracerSeeding.unit(s.normal());
-        }
-    }
-
-    private static void checkSettings(RunSettings s) {
-        if (s.fixedStep() ? !(s.stepMyr() > 0) : !(s.accuracy() > 0)) {
-            throw new IllegalArgumentException(s.fixedStep() ? "step_myr must be positive" : "accuracy must be positive");
-        }
-    }
-
     /** The system being stepped (for tests in this package). */
     GroupSystem system() {
         return system;
     }
 
-    /** The integrator in use. */
-    public Integrator integrator() {
-        return integrator;
+    /** Force evaluations of the bodies so far (IAS15's iterations included; trial steps of the step chooser not). */
+    public long forceEvaluations() {
+        return stepper.evaluations();
+    }
+
+    /** The scheme in use. */
+    public RunSettings.Scheme scheme() {
+        return settings.scheme();
     }
 
     @Override
@@ -418,12 +388,12 @@ public final class Simulation implements RunView, AutoCloseable {
 
     @Override
     public double tGyr() {
-        return system.time();
+        return sampling ? sampleT : system.time();
     }
 
     @Override
     public double scaleFactor() {
-        return history.scaleFactor(system.time());
+        return history.scaleFactor(tGyr());
     }
 
     @Override
@@ -448,32 +418,32 @@ public final class Simulation implements RunView, AutoCloseable {
 
     @Override
     public double[] bodyX() {
-        return system.bodies.x;
+        return sampling ? shown[0] : system.bodies.x;
     }
 
     @Override
     public double[] bodyY() {
-        return system.bodies.y;
+        return sampling ? shown[1] : system.bodies.y;
     }
 
     @Override
     public double[] bodyZ() {
-        return system.bodies.z;
+        return sampling ? shown[2] : system.bodies.z;
     }
 
     @Override
     public double[] bodyVx() {
-        return system.bodies.vx;
+        return sampling ? shown[3] : system.bodies.vx;
     }
 
     @Override
     public double[] bodyVy() {
-        return system.bodies.vy;
+        return sampling ? shown[4] : system.bodies.vy;
     }
 
     @Override
     public double[] bodyVz() {
-        return system.bodies.vz;
+        return sampling ? shown[5] : system.bodies.vz;
     }
 
     @Override

@@ -34,7 +34,7 @@ public final class RunReader {
      */
     public static RunSettings read(Node root, double untilOverrideGyr) {
         Node run = root.requireTable("run");
-        run.allowOnly("until_gyr", "start_gyr", "integrator", "accuracy", "step_myr", "snapshot_every_myr",
+        run.allowOnly("until_gyr", "start_gyr", "integrator", "accuracy", "tolerance", "step_myr", "snapshot_every_myr",
                 "dark_energy_force", "background_matter", "seed", "dynamical_friction", "coulomb_log", "merge_within_kpc");
         double start = run.number("start_gyr", 0.0);
         double until = Double.isNaN(untilOverrideGyr) ? run.number("until_gyr") : untilOverrideGyr;
@@ -45,16 +45,42 @@ public final class RunReader {
         if (until == start) {
             throw run.error("until_gyr", "the run would be empty: until_gyr equals start_gyr (" + Node.fmt(start) + ")");
         }
-        String schemeName = run.choice("integrator",
-                Arrays.stream(Scheme.values()).map(Scheme::key).toList(), Scheme.LEAPFROG.key());
         boolean hasStep = run.has("step_myr");
         boolean hasAccuracy = run.has("accuracy");
+        // accuracy and step_myr belong to the splitting schemes: a scenario that gives one without
+        // naming an integrator keeps the leapfrog it was written for
+        Scheme fallback = hasStep || hasAccuracy ? Scheme.LEAPFROG : Scheme.IAS15;
+        String schemeName = run.choice("integrator",
+                Arrays.stream(Scheme.values()).map(Scheme::key).toList(), fallback.key());
+        boolean ias15 = Scheme.IAS15.key().equals(schemeName);
         if (hasStep && hasAccuracy) {
             throw run.error("step_myr", "give either step_myr (a fixed step) or accuracy (an adaptive step), not both");
         }
+        if (ias15 && hasAccuracy) {
+            throw run.error("accuracy", "is the step parameter of leapfrog and yoshida4; ias15 takes tolerance"
+                    + " (its step-control parameter epsilon, default 1e-9)");
+        }
+        if (!ias15 && run.has("tolerance")) {
+            throw run.error("tolerance", "is the step-control parameter of ias15; " + schemeName + " takes accuracy");
+        }
+        if (hasStep && run.has("tolerance")) {
+            throw run.error("tolerance", "give either step_myr (a fixed step) or tolerance (an adaptive step), not both");
+        }
         double step = hasStep ? run.positive("step_myr") : Double.NaN;
-        double accuracy = hasStep ? Double.NaN : run.positive("accuracy", DEFAULT_ACCURACY);
-        checkStepping(run, start, until, step, accuracy);
+        double accuracy;
+        if (hasStep) {
+            accuracy = Double.NaN;
+        } else if (ias15) {
+            accuracy = run.positive("tolerance", org.holdfast.integrators.Ias15.DEFAULT_EPSILON);
+            // below about 1e-16 the error estimate is round-off and the step would shrink without end
+            if (!(accuracy < 1e-3) || accuracy < 1e-16) {
+                throw run.error("tolerance", "must be from 1e-16 to below 1e-3 (default 1e-9; 1e-12 to 1e-6 are"
+                        + " sensible), got " + Node.fmt(accuracy));
+            }
+        } else {
+            accuracy = run.positive("accuracy", DEFAULT_ACCURACY);
+        }
+        checkStepping(run, start, until, step, ias15 ? Double.NaN : accuracy);
         double snap = run.positive("snapshot_every_myr", DEFAULT_SNAPSHOT_MYR);
         checkSnapshotCount(run, start, until, snap, untilOverrideGyr);
         boolean de = run.bool("dark_energy_force", true);

@@ -40,7 +40,7 @@ class StopTest {
         };
         for (Scheme scheme : Scheme.values()) {
             steps.clear();
-            try (Simulation sim = Simulation.create(boundPair(), Groups.adaptive(scheme, 40, 0.02, true), h)) {
+            try (Simulation sim = Simulation.create(boundPair(), Groups.adaptive(scheme, 40, scheme == Scheme.IAS15 ? 1e-9 : 0.02, true), h)) {
                 RunResult r = sim.run(List.of(obs));
                 assertEquals(StopReason.Kind.BEFORE_RIP, r.reason().kind(), r.reason().message());
                 assertTrue(r.endGyr() < h.latestGyr() && r.endGyr() > h.latestGyr() - 1e-5, "ended at " + r.endGyr());
