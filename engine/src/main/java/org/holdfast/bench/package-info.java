@@ -1,5 +1,2 @@
-/**
- * Benchmarks of the hot paths, run by {@code holdfast bench}. Speed targets live here, never in
- * unit tests.
- */
+/** The interface every `holdfast bench` suite implements (found through ServiceLoader); the command is cli.BenchCommand. */
 package org.holdfast.bench;

@@ -4,14 +4,14 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 
 import org.holdfast.expansion.ConstantW;
-import org.holdfast.expansion.CosmologicalConstant;
+import org.holdfast.expansion.ConstantW;
 import org.holdfast.expansion.Cosmology;
 import org.holdfast.expansion.DarkEnergyModel;
 import org.holdfast.expansion.ExpansionTable;
 import org.holdfast.expansion.InvalidCosmologyException;
 import org.holdfast.expansion.W0WaDarkEnergy;
 import org.holdfast.expansion.WTableCsv;
-import org.holdfast.scenario.ScenarioException;
+import org.holdfast.schema.ScenarioException;
 
 import picocli.CommandLine.Option;
 
@@ -68,7 +68,7 @@ public final class CosmologyOptions {
         } else {
             double w = w0 == null ? -1 : w0;
             double a = wa == null ? 0 : wa;
-            model = a == 0 ? (w == -1 ? new CosmologicalConstant() : new ConstantW(w)) : new W0WaDarkEnergy(w, a);
+            model = a == 0 ? (w == -1 ? new ConstantW(-1) : new ConstantW(w)) : new W0WaDarkEnergy(w, a);
         }
         double r = 0;
         if (omegaR != null) {

@@ -18,8 +18,10 @@ import org.holdfast.run.NewtonianLimitWatch;
 import org.holdfast.run.RunObserver;
 import org.holdfast.run.Simulation;
 import org.holdfast.scenario.Scenario;
-import org.holdfast.scenario.ScenarioException;
+import org.holdfast.schema.ScenarioException;
 import org.holdfast.units.Units;
+import org.holdfast.console.Version;
+import org.holdfast.console.RunProgress;
 
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;

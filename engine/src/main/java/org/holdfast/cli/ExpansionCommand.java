@@ -17,10 +17,10 @@ import org.holdfast.expansion.ExpansionPlot;
 import org.holdfast.expansion.ExpansionRangeException;
 import org.holdfast.expansion.ExpansionTable;
 import org.holdfast.expansion.RipLadder;
-import org.holdfast.scenario.Node;
-import org.holdfast.scenario.Overrides;
-import org.holdfast.scenario.ScenarioException;
-import org.holdfast.scenario.ScenarioFile;
+import org.holdfast.schema.Node;
+import org.holdfast.schema.Overrides;
+import org.holdfast.schema.ScenarioException;
+import org.holdfast.schema.ScenarioFile;
 import org.holdfast.units.Units;
 
 import com.fasterxml.jackson.databind.ObjectMapper;

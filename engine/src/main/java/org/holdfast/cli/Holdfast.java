@@ -2,8 +2,9 @@ package org.holdfast.cli;
 
 import java.io.PrintWriter;
 
-import org.holdfast.bench.BenchCommand;
-import org.holdfast.scenario.ScenarioException;
+import org.holdfast.cli.BenchCommand;
+import org.holdfast.schema.ScenarioException;
+import org.holdfast.console.Version;
 
 import picocli.CommandLine;
 import picocli.CommandLine.Command;

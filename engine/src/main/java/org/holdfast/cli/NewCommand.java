@@ -9,7 +9,7 @@ import java.util.List;
 import java.util.concurrent.Callable;
 
 import org.holdfast.output.RunFolder;
-import org.holdfast.scenario.ScenarioException;
+import org.holdfast.schema.ScenarioException;
 import org.holdfast.scenario.generate.GroupGenerator;
 import org.holdfast.scenario.generate.GroupRecipe;
 import org.holdfast.scenario.generate.ScenarioText;

@@ -7,7 +7,7 @@ import org.holdfast.group.GalaxySpec;
 import org.holdfast.expansion.RipLadder;
 import org.holdfast.group.GroupSpec;
 import org.holdfast.scenario.GroupReader;
-import org.holdfast.scenario.Node;
+import org.holdfast.schema.Node;
 
 /**
  * The group on the first rung of the rip ladder: the scenario's own members when it has any

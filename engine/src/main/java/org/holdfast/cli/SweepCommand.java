@@ -13,8 +13,8 @@ import java.util.List;
 import java.util.Set;
 import java.util.concurrent.Callable;
 
-import org.holdfast.scenario.Overrides;
-import org.holdfast.scenario.ScenarioException;
+import org.holdfast.schema.Overrides;
+import org.holdfast.schema.ScenarioException;
 import org.holdfast.sweep.Axis;
 import org.holdfast.sweep.KeyCheck;
 import org.holdfast.sweep.LocalEngine;
@@ -25,6 +25,7 @@ import org.holdfast.sweep.SweepEngine;
 import org.holdfast.sweep.SweepPlan;
 import org.holdfast.sweep.SweepProgress;
 import org.holdfast.sweep.ValueCheck;
+import org.holdfast.console.RunProgress;
 
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;

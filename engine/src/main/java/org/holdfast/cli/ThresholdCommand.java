@@ -13,9 +13,9 @@ import java.util.concurrent.Callable;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.SerializationFeature;
 
-import org.holdfast.scenario.Overrides;
+import org.holdfast.schema.Overrides;
 import org.holdfast.scenario.Scenario;
-import org.holdfast.scenario.ScenarioException;
+import org.holdfast.schema.ScenarioException;
 import org.holdfast.sweep.Axis;
 import org.holdfast.sweep.KeyCheck;
 import org.holdfast.sweep.LocalEngine;

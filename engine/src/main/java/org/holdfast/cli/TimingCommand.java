@@ -11,10 +11,10 @@ import java.util.function.DoubleUnaryOperator;
 
 import org.holdfast.expansion.ExpansionTable;
 import org.holdfast.expansion.InvalidCosmologyException;
-import org.holdfast.scenario.Node;
-import org.holdfast.scenario.Overrides;
-import org.holdfast.scenario.ScenarioException;
-import org.holdfast.scenario.ScenarioFile;
+import org.holdfast.schema.Node;
+import org.holdfast.schema.Overrides;
+import org.holdfast.schema.ScenarioException;
+import org.holdfast.schema.ScenarioFile;
 import org.holdfast.uncertain.UncertainNumbers;
 import org.holdfast.weighing.Background;
 import org.holdfast.weighing.DarkEnergyBound;
@@ -323,7 +323,7 @@ public final class TimingCommand implements Callable<Integer> {
             nodes[j] = lo + (hi - lo) * j / (n - 1);
             try {
                 ExpansionTable t = new org.holdfast.expansion.Cosmology(base.h0Kms(), base.omegaM(), base.omegaR(),
-                        base.omegaK(), nodes[j] == -1 ? new org.holdfast.expansion.CosmologicalConstant()
+                        base.omegaK(), nodes[j] == -1 ? new org.holdfast.expansion.ConstantW(-1)
                                 : new org.holdfast.expansion.ConstantW(nodes[j])).solve(1);
                 fields[j] = x -> Background.DARK_ENERGY.coefficient(t, x);
                 ages[j] = t.ageGyr();

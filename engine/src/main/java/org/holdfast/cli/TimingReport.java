@@ -14,7 +14,7 @@ import java.util.function.DoubleUnaryOperator;
 
 import org.holdfast.expansion.ExpansionTable;
 import org.holdfast.output.Charts;
-import org.holdfast.scenario.ScenarioException;
+import org.holdfast.schema.ScenarioException;
 import org.holdfast.units.Units;
 import org.holdfast.weighing.Background;
 import org.holdfast.weighing.DarkEnergyBound;

@@ -3,8 +3,8 @@ package org.holdfast.expansion;
 import java.nio.file.Path;
 import java.util.List;
 
-import org.holdfast.scenario.Node;
-import org.holdfast.scenario.ScenarioException;
+import org.holdfast.schema.Node;
+import org.holdfast.schema.ScenarioException;
 
 /**
  * Reads the {@code [cosmology]} table of a scenario file:
@@ -43,7 +43,7 @@ public final class CosmologyReader {
         }
         double omegaK = cosmology.number("omega_k", 0.0);
         Node de = cosmology.table("dark_energy");
-        DarkEnergyModel model = de == null ? new CosmologicalConstant() : darkEnergy(de);
+        DarkEnergyModel model = de == null ? new ConstantW(-1) : darkEnergy(de);
         try {
             if (Double.isNaN(omegaR)) {
                 check(cosmology, "h0", h0);
@@ -105,7 +105,7 @@ public final class CosmologyReader {
         double w0 = de.number("w0", -1.0);
         double wa = de.number("wa", 0.0);
         if (wa == 0) {
-            return w0 == -1.0 ? new CosmologicalConstant() : new ConstantW(w0);
+            return w0 == -1.0 ? new ConstantW(-1) : new ConstantW(w0);
         }
         return new W0WaDarkEnergy(w0, wa);
     }

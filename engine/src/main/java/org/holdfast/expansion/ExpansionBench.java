@@ -23,7 +23,7 @@ public final class ExpansionBench implements BenchSuite {
 
     @Override
     public void run(boolean quick, Map<String, Object> results) {
-        Cosmology lambda = new Cosmology(70, 0.3, 0, 0, new CosmologicalConstant());
+        Cosmology lambda = new Cosmology(70, 0.3, 0, 0, new ConstantW(-1));
         Cosmology phantom = new Cosmology(70, 0.3, 0, 0, new W0WaDarkEnergy(-1.3, 0.2));
         int builds = quick ? 3 : 15;
         double sink = 0;

@@ -1,6 +1,6 @@
 package org.holdfast.expansion;
 
-import org.holdfast.scenario.ScenarioException;
+import org.holdfast.schema.ScenarioException;
 
 /** A lookup of the expansion history at a time where it is not defined (past a rip, before the Big Bang). */
 public final class ExpansionRangeException extends IllegalArgumentException {

@@ -10,7 +10,7 @@ import java.util.Locale;
 import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVParser;
 import org.apache.commons.csv.CSVRecord;
-import org.holdfast.scenario.ScenarioException;
+import org.holdfast.schema.ScenarioException;
 
 /**
  * Reads a w(a) table from CSV: a header line {@code a,w}, then one {@code a,w} pair per line,
@@ -29,7 +29,7 @@ public final class WTableCsv {
 
     /** Reads and checks the table. */
     public static TabulatedW read(Path file) {
-        String text = org.holdfast.scenario.InputText.read(file, "w(a) table");
+        String text = org.holdfast.schema.InputText.read(file, "w(a) table");
         // With a line break after every record, the parser's line count after a record is its line.
         if (!text.endsWith("\n")) {
             text += "\n";

@@ -10,7 +10,7 @@ import org.holdfast.run.RunResult;
 import org.holdfast.run.RunSettings;
 import org.holdfast.run.Simulation;
 import org.holdfast.scenario.Scenario;
-import org.holdfast.scenario.ScenarioException;
+import org.holdfast.schema.ScenarioException;
 
 /**
  * One run of a scenario that answers the question holdfast exists for: who stays bound,

@@ -13,6 +13,7 @@ import org.holdfast.run.RunEvent;
 import org.holdfast.run.RunObserver;
 import org.holdfast.run.RunView;
 import org.holdfast.run.StopReason;
+import org.holdfast.forces.Binding;
 
 /**
  * Decides every member's fate by watching the run. At regular analysis times it finds the

@@ -2,6 +2,7 @@ package org.holdfast.fates;
 
 import org.holdfast.run.RunView;
 import org.holdfast.units.Units;
+import org.holdfast.forces.Binding;
 
 /**
  * The state of one member relative to the centre of mass of the main group (without the member

@@ -4,6 +4,8 @@ import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
 
+import org.holdfast.forces.Binding;
+
 /**
  * Hierarchical bound subgroups at one instant. Starting from single bodies, the most deeply
  * bound pair of subgroups (by {@link Binding.Result#depth()}, each subgroup taken as a point at

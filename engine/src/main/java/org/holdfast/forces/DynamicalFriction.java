@@ -7,6 +7,7 @@ import org.apache.commons.math3.special.Erf;
 import org.holdfast.halos.HaloProfile;
 import org.holdfast.halos.JeansDispersion;
 import org.holdfast.units.Units;
+import org.holdfast.group.CoulombLog;
 
 /**
  * Chandrasekhar's dynamical friction for a Maxwellian background (Binney &amp; Tremaine 2008,

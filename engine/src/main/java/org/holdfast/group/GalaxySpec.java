@@ -13,7 +13,7 @@ package org.holdfast.group;
  * @param coulombLog this member's own Coulomb logarithm for dynamical friction; null for the run's
  */
 public record GalaxySpec(String name, double massMsun, double[] positionKpc, double[] velocityKms,
-        HaloSpec halo, StarsSpec stars, org.holdfast.forces.CoulombLog coulombLog) {
+        HaloSpec halo, StarsSpec stars, org.holdfast.group.CoulombLog coulombLog) {
 
     /** A member that uses the run's Coulomb logarithm. */
     public GalaxySpec(String name, double massMsun, double[] positionKpc, double[] velocityKms, HaloSpec halo,

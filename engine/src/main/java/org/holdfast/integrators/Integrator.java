@@ -27,7 +27,7 @@ public interface Integrator {
     double maxTimeFraction();
 
     /** The integrator of a scheme. */
-    static Integrator of(RunSettings.Scheme scheme) {
+    static Integrator of(Scheme scheme) {
         return switch (scheme) {
             case LEAPFROG -> new Leapfrog();
             case YOSHIDA4 -> new Yoshida4();

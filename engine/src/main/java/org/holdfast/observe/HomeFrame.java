@@ -9,7 +9,7 @@ import org.joml.Vector3d;
 
 /**
  * Turns what an observer sees into states relative to the centre of the home galaxy (axes as
- * in the package note), and back. Immutable; one per {@link Observer}.
+ * in the package note), and back. Immutable; one per {@link ObserverSite}.
  *
  * <p>Position: r_home = T (r_helio - R0 x), with r_helio in Galactic axes and T the rotation
  * about y by theta = asin(h / R0) that lifts the observer to height h. Velocity:
@@ -18,12 +18,12 @@ import org.joml.Vector3d;
  */
 public final class HomeFrame {
 
-    private final Observer observer;
+    private final ObserverSite observer;
     private final Matrix3dc tilt;
     private final Matrix3dc skyToHome;
     private final double[] observerKpc;
 
-    public HomeFrame(Observer observer) {
+    public HomeFrame(ObserverSite observer) {
         this.observer = observer;
         double r0 = observer.distanceToCentreKpc();
         double h = observer.heightKpc();
@@ -37,7 +37,7 @@ public final class HomeFrame {
     }
 
     /** The observer this frame belongs to. */
-    public Observer observer() {
+    public ObserverSite observer() {
         return observer;
     }
 

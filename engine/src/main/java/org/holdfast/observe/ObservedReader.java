@@ -3,7 +3,7 @@ package org.holdfast.observe;
 import java.util.ArrayList;
 import java.util.List;
 
-import org.holdfast.scenario.Node;
+import org.holdfast.schema.Node;
 import org.joml.Vector3d;
 
 /**
@@ -41,7 +41,7 @@ public final class ObservedReader {
 
     /**
      * @param observed the {@code observed} table of a member
-     * @throws org.holdfast.scenario.ScenarioException naming file, line and key for a missing,
+     * @throws org.holdfast.schema.ScenarioException naming file, line and key for a missing,
      *     doubled or out-of-range value
      */
     public static ObservedMember read(Node observed) {

@@ -1,6 +1,6 @@
 package org.holdfast.observe;
 
-import org.holdfast.scenario.Node;
+import org.holdfast.schema.Node;
 
 /**
  * Reads the {@code [observer]} table:
@@ -34,7 +34,7 @@ public final class ObserverReader {
      * @param observed the first member's {@code observed} table, named in the error if the
      *     scenario has no {@code [observer]}
      */
-    public static Observer forObserved(Node root, Node observed) {
+    public static ObserverSite forObserved(Node root, Node observed) {
         Node table = root.table("observer");
         if (table == null) {
             throw observed.error(null, "a member given by observation needs an [observer] table"
@@ -63,23 +63,23 @@ public final class ObserverReader {
 
     /**
      * @param observer the {@code [observer]} table
-     * @throws org.holdfast.scenario.ScenarioException naming file, line and key for an
+     * @throws org.holdfast.schema.ScenarioException naming file, line and key for an
      *     unknown key, a missing home galaxy, R0 <= 0, or |height| >= R0
      */
-    public static Observer read(Node observer) {
+    public static ObserverSite read(Node observer) {
         observer.allowOnly(GALAXY, DISTANCE, HEIGHT, VELOCITY, UNMEASURED, SIGMA);
         String home = observer.string(GALAXY);
         if (home.isBlank()) {
             throw observer.error(GALAXY, "must name the member the observer lives in");
         }
-        double r0 = observer.positive(DISTANCE, Observer.DEFAULT_DISTANCE_TO_CENTRE_KPC);
-        double h = observer.number(HEIGHT, Observer.DEFAULT_HEIGHT_KPC);
+        double r0 = observer.positive(DISTANCE, ObserverSite.DEFAULT_DISTANCE_TO_CENTRE_KPC);
+        double h = observer.number(HEIGHT, ObserverSite.DEFAULT_HEIGHT_KPC);
         if (!(Math.abs(h) < r0)) {
             throw observer.error(HEIGHT, "must be smaller in size than " + DISTANCE + " ("
                     + r0 + " kpc), got " + h);
         }
         double[] v = observer.has(VELOCITY) ? observer.vector(VELOCITY, 3)
-                : new double[] {Observer.DEFAULT_U_KMS, Observer.DEFAULT_V_KMS, Observer.DEFAULT_W_KMS};
-        return new Observer(home, r0, h, v[0], v[1], v[2]);
+                : new double[] {ObserverSite.DEFAULT_U_KMS, ObserverSite.DEFAULT_V_KMS, ObserverSite.DEFAULT_W_KMS};
+        return new ObserverSite(home, r0, h, v[0], v[1], v[2]);
     }
 }

@@ -17,7 +17,7 @@ import org.knowm.xchart.style.markers.SeriesMarkers;
 
 /**
  * Charts in holdfast's own look (XChart, headless): paper background, ink text, light grid,
- * the {@link Palette} for series. Every chart the project draws starts here.
+ * the {@link ChartPalette} for series. Every chart the project draws starts here.
  */
 public final class Charts {
 
@@ -33,25 +33,25 @@ public final class Charts {
         XYChart chart = new XYChartBuilder().width(width).height(height).title(title)
                 .xAxisTitle(xTitle).yAxisTitle(yTitle).build();
         var s = chart.getStyler();
-        s.setChartBackgroundColor(Palette.PAPER);
-        s.setPlotBackgroundColor(Palette.PAPER);
+        s.setChartBackgroundColor(ChartPalette.PAPER);
+        s.setPlotBackgroundColor(ChartPalette.PAPER);
         s.setPlotBorderVisible(false);
-        s.setPlotGridLinesColor(Palette.GRID);
-        s.setChartFontColor(Palette.INK);
-        s.setAxisTickLabelsColor(Palette.INK);
+        s.setPlotGridLinesColor(ChartPalette.GRID);
+        s.setChartFontColor(ChartPalette.INK);
+        s.setAxisTickLabelsColor(ChartPalette.INK);
         s.setChartTitleFont(TITLE);
         s.setAxisTitleFont(AXIS);
         s.setAxisTickLabelsFont(TICKS);
         s.setLegendFont(TICKS);
-        s.setLegendBackgroundColor(Palette.PAPER);
-        s.setLegendBorderColor(Palette.GRID);
+        s.setLegendBackgroundColor(ChartPalette.PAPER);
+        s.setLegendBorderColor(ChartPalette.GRID);
         s.setLegendPosition(LegendPosition.OutsideE);
         s.setMarkerSize(0);
         s.setAntiAlias(true);
         s.setChartTitleBoxVisible(false);
         s.setAnnotationTextFont(TICKS);
-        s.setAnnotationTextFontColor(Palette.INK);
-        s.setAnnotationLineColor(Palette.GUIDE);
+        s.setAnnotationTextFontColor(ChartPalette.INK);
+        s.setAnnotationLineColor(ChartPalette.GUIDE);
         return chart;
     }
 
@@ -148,7 +148,7 @@ public final class Charts {
     /** Adds a solid line in member colour i. */
     public static XYSeries line(XYChart chart, String name, double[] x, double[] y, int colour) {
         XYSeries s = chart.addSeries(name, x, y);
-        s.setLineColor(Palette.member(colour));
+        s.setLineColor(ChartPalette.member(colour));
         s.setLineStyle(new BasicStroke(2.2f));
         s.setMarker(SeriesMarkers.NONE);
         return s;
@@ -157,7 +157,7 @@ public final class Charts {
     /** Adds a dashed grey guide line. */
     public static XYSeries guide(XYChart chart, String name, double[] x, double[] y) {
         XYSeries s = chart.addSeries(name, x, y);
-        s.setLineColor(Palette.GUIDE);
+        s.setLineColor(ChartPalette.GUIDE);
         s.setLineStyle(new BasicStroke(1.6f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_MITER, 10f,
                 new float[] {7f, 5f}, 0f));
         s.setMarker(SeriesMarkers.NONE);
@@ -168,7 +168,7 @@ public final class Charts {
     public static XYSeries points(XYChart chart, String name, double[] x, double[] y, int colour, int size) {
         XYSeries s = chart.addSeries(name, x, y);
         s.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Scatter);
-        s.setMarkerColor(Palette.member(colour));
+        s.setMarkerColor(ChartPalette.member(colour));
         s.setMarker(SeriesMarkers.CIRCLE);
         chart.getStyler().setMarkerSize(size);
         return s;
@@ -187,7 +187,7 @@ public final class Charts {
         }
         java.awt.image.BufferedImage all = new java.awt.image.BufferedImage(w, h, java.awt.image.BufferedImage.TYPE_INT_RGB);
         java.awt.Graphics2D g = all.createGraphics();
-        g.setColor(Palette.PAPER);
+        g.setColor(ChartPalette.PAPER);
         g.fillRect(0, 0, w, h);
         int x = 0;
         for (java.awt.image.BufferedImage p : parts) {
@@ -214,11 +214,11 @@ public final class Charts {
         java.awt.image.BufferedImage all = new java.awt.image.BufferedImage(w, h, java.awt.image.BufferedImage.TYPE_INT_RGB);
         java.awt.Graphics2D g = all.createGraphics();
         g.setRenderingHint(java.awt.RenderingHints.KEY_TEXT_ANTIALIASING, java.awt.RenderingHints.VALUE_TEXT_ANTIALIAS_ON);
-        g.setColor(Palette.PAPER);
+        g.setColor(ChartPalette.PAPER);
         g.fillRect(0, 0, w, h);
         g.drawImage(top, 0, 0, null);
         g.setFont(TICKS);
-        g.setColor(Palette.INK);
+        g.setColor(ChartPalette.INK);
         int columnPx = (w - 2 * 60) / columns;
         for (int i = 0; i < notes.size(); i++) {
             int col = i / Math.max(rows, 1);

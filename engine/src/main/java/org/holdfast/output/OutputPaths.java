@@ -3,7 +3,7 @@ package org.holdfast.output;
 import java.nio.file.Files;
 import java.nio.file.Path;
 
-import org.holdfast.scenario.ScenarioException;
+import org.holdfast.schema.ScenarioException;
 
 /**
  * Checks an output path the user named before any work is done, so that a path that runs

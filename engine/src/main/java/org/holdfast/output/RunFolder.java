@@ -11,7 +11,7 @@ import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
 import java.util.Map;
 
-import org.holdfast.scenario.ScenarioException;
+import org.holdfast.schema.ScenarioException;
 
 import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.SerializationFeature;
@@ -121,21 +121,9 @@ public final class RunFolder {
         }
     }
 
-    /** A file-system failure in plain words. */
+    /** Kept for its callers: see {@link org.holdfast.schema.IoFailure#reason}. */
     public static String reason(IOException e) {
-        if (e instanceof AccessDeniedException) {
-            return "permission denied";
-        }
-        if (e instanceof FileAlreadyExistsException f) {
-            return (f.getFile() == null ? "a file" : f.getFile()) + " is in the way and is not a folder";
-        }
-        if (e instanceof NoSuchFileException) {
-            return "the file system refuses it (no such file or directory)";
-        }
-        if (e instanceof FileSystemException f && f.getReason() != null) {
-            return f.getReason().toLowerCase(java.util.Locale.ROOT);
-        }
-        return String.valueOf(e.getMessage());
+        return org.holdfast.schema.IoFailure.reason(e);
     }
 
     /** Creates the folder and copies the scenario file into it. */

@@ -71,7 +71,7 @@ public final class RunPlots {
         double tSpan = t.length == 0 ? 1 : Math.max(t[t.length - 1] - t[0], 1e-9);
         for (Map.Entry<String, double[]> e : rec.distancesKpc().entrySet()) {
             double[] d = log ? atLeast(e.getValue(), 1.0) : e.getValue();
-            if (colour >= Palette.size()) {
+            if (colour >= ChartPalette.size()) {
                 // dashed, so thinned: XChart restarts the dashes on every segment
                 double[][] thin = Charts.thinForDashes(t, d, tSpan, yLo, yHi, log, PLOT_W, PLOT_H, DASH_MIN_PX);
                 Charts.line(c, e.getKey(), thin[0], thin[1], colour).setLineStyle(

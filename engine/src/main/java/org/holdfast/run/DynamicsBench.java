@@ -23,6 +23,7 @@ import org.holdfast.group.GroupSpec;
 import org.holdfast.group.HaloSpec;
 import org.holdfast.group.StarsSpec;
 import org.holdfast.units.Units;
+import org.holdfast.integrators.Scheme;
 
 /**
  * Benchmarks of the dynamics: the direct-sum pair loop against the same loop in C (when gcc is
@@ -184,7 +185,7 @@ public final class DynamicsBench implements BenchSuite {
      */
     static double tracerUpdatesPerSecond(int threads, int steps, Map<String, Object> results, String heapKey) {
         ExpansionHistory h = new BenchHistory();
-        RunSettings s = new RunSettings(0, steps * 1e-3, RunSettings.Scheme.LEAPFROG, Double.NaN, 1, Double.NaN,
+        RunSettings s = new RunSettings(0, steps * 1e-3, Scheme.LEAPFROG, Double.NaN, 1, Double.NaN,
                 true, false, 5);
         if (heapKey != null) {
             System.gc();

@@ -13,12 +13,13 @@ import org.apache.commons.rng.UniformRandomProvider;
 import org.apache.commons.rng.simple.RandomSource;
 import org.holdfast.bench.BenchSuite;
 import org.holdfast.expansion.ExpansionHistory;
-import org.holdfast.forces.CoulombLog;
+import org.holdfast.group.CoulombLog;
 import org.holdfast.forces.PairGravity;
 import org.holdfast.group.GalaxySpec;
 import org.holdfast.group.GroupSpec;
 import org.holdfast.group.HaloSpec;
 import org.holdfast.units.Units;
+import org.holdfast.integrators.Scheme;
 
 /**
  * The run engine against a general ODE library on the same problem: 15 softened point masses in
@@ -45,7 +46,7 @@ public final class IntegratorBench implements BenchSuite {
     public void run(boolean quick, Map<String, Object> results) {
         ExpansionHistory h = new ConstantDarkEnergy();
         int reps = quick ? 1 : 3;
-        double[] ias = best(reps, () -> holdfast(RunSettings.Scheme.IAS15, 1e-9, h));
+        double[] ias = best(reps, () -> holdfast(Scheme.IAS15, 1e-9, h));
         results.put("group15_ias15", describe(ias));
         double[] dp = null;
         double[] tols = {1e-8, 1e-9, 1e-10, 1e-11, 1e-12, 1e-13, 1e-14};
@@ -63,7 +64,7 @@ public final class IntegratorBench implements BenchSuite {
         double[] match = ias;
         if (dp[1] > ias[1]) {
             for (double eps : new double[] {1e-6, 1e-7, 1e-8}) {
-                double[] r = best(reps, () -> holdfast(RunSettings.Scheme.IAS15, eps, h));
+                double[] r = best(reps, () -> holdfast(Scheme.IAS15, eps, h));
                 if (r[1] <= dp[1]) {
                     match = r;
                     match[2] = eps;
@@ -77,11 +78,11 @@ public final class IntegratorBench implements BenchSuite {
                 "%.1f at energy error %.1e vs %.1e (target >= 20)%s", speedup, match[1], dp[1], speedup >= 20 ? "" : " MISSED"));
         if (!quick) {
             for (double acc : new double[] {0.03, 0.01, 0.003}) {
-                results.put("group15_leapfrog_" + acc, describe(best(1, () -> holdfast(RunSettings.Scheme.LEAPFROG, acc, h))));
-                results.put("group15_yoshida4_" + acc, describe(best(1, () -> holdfast(RunSettings.Scheme.YOSHIDA4, acc, h))));
+                results.put("group15_leapfrog_" + acc, describe(best(1, () -> holdfast(Scheme.LEAPFROG, acc, h))));
+                results.put("group15_yoshida4_" + acc, describe(best(1, () -> holdfast(Scheme.YOSHIDA4, acc, h))));
             }
             for (double eps : new double[] {1e-6, 1e-9, 1e-12}) {
-                results.put("group15_ias15_" + eps, describe(best(1, () -> holdfast(RunSettings.Scheme.IAS15, eps, h))));
+                results.put("group15_ias15_" + eps, describe(best(1, () -> holdfast(Scheme.IAS15, eps, h))));
             }
         }
     }
@@ -120,7 +121,7 @@ public final class IntegratorBench implements BenchSuite {
         return new GroupSpec(gs, null);
     }
 
-    static double[] holdfast(RunSettings.Scheme scheme, double accuracy, ExpansionHistory h) {
+    static double[] holdfast(Scheme scheme, double accuracy, ExpansionHistory h) {
         RunSettings s = new RunSettings(0, UNTIL_GYR, scheme, accuracy, Double.NaN, 1e9, true, false, 1, false,
                 CoulombLog.DEFAULT, 0);
         long t0 = System.nanoTime();

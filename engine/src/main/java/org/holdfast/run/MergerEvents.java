@@ -1,7 +1,7 @@
 package org.holdfast.run;
 
 import org.holdfast.expansion.ExpansionHistory;
-import org.holdfast.fates.Binding;
+import org.holdfast.forces.Binding;
 import org.holdfast.forces.Bodies;
 import org.holdfast.integrators.DenseOutput;
 

@@ -6,7 +6,7 @@ import java.util.List;
 import java.util.Map;
 
 import org.holdfast.expansion.ExpansionHistory;
-import org.holdfast.fates.Binding;
+import org.holdfast.forces.Binding;
 import org.holdfast.forces.Bodies;
 import org.holdfast.forces.Tracers;
 import org.holdfast.halos.HaloProfile;

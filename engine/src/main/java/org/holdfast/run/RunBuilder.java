@@ -6,7 +6,7 @@ import java.util.List;
 import org.holdfast.expansion.ExpansionHistory;
 import org.holdfast.forces.BackgroundTide;
 import org.holdfast.forces.Bodies;
-import org.holdfast.forces.CoulombLog;
+import org.holdfast.group.CoulombLog;
 import org.holdfast.forces.DynamicalFriction;
 import org.holdfast.forces.KernelTable;
 import org.holdfast.forces.PairGravity;
@@ -18,6 +18,7 @@ import org.holdfast.group.StarsSpec;
 import org.holdfast.halos.HaloProfile;
 import org.holdfast.halos.Halos;
 import org.holdfast.units.Units;
+import org.holdfast.integrators.Scheme;
 
 /**
  * Builds a {@link Simulation}: moves the group to its centre-of-mass frame, builds the halos, the
@@ -160,7 +161,7 @@ final class RunBuilder {
         if (s.fixedStep() ? !(s.stepMyr() > 0) : !(s.accuracy() > 0)) {
             throw new IllegalArgumentException(s.fixedStep() ? "step_myr must be positive" : "accuracy must be positive");
         }
-        if (s.scheme() == RunSettings.Scheme.IAS15 && !s.fixedStep() && !(s.accuracy() < 1e-3)) {
+        if (s.scheme() == Scheme.IAS15 && !s.fixedStep() && !(s.accuracy() < 1e-3)) {
             throw new IllegalArgumentException("accuracy: for ias15 the step-control parameter epsilon must be below 1e-3"
                     + " (default 1e-9), got " + s.accuracy());
         }

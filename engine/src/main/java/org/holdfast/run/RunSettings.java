@@ -1,6 +1,7 @@
 package org.holdfast.run;
 
-import org.holdfast.forces.CoulombLog;
+import org.holdfast.group.CoulombLog;
+import org.holdfast.integrators.Scheme;
 
 /**
  * How a run steps and what it includes.
@@ -45,37 +46,6 @@ public record RunSettings(double startGyr, double untilGyr, Scheme scheme, doubl
     /** Whether members may merge: not in a backward run (a merger cannot be undone), not at distance 0. */
     public boolean mergers() {
         return !backward() && mergeWithinKpc != 0;
-    }
-
-    /** The integration schemes. */
-    public enum Scheme {
-        /** Kick-drift-kick leapfrog, second order. */
-        LEAPFROG("leapfrog"),
-        /** Yoshida's fourth-order composition of leapfrogs (Yoshida 1990, Phys. Lett. A 150, 262). */
-        YOSHIDA4("yoshida4"),
-        /** IAS15, 15th-order Gauss-Radau with its own step control (Rein &amp; Spiegel 2015, MNRAS 446, 1424). */
-        IAS15("ias15");
-
-        private final String key;
-
-        Scheme(String key) {
-            this.key = key;
-        }
-
-        /** The name used in scenario files. */
-        public String key() {
-            return key;
-        }
-
-        /** The scheme of a scenario name, or null. */
-        public static Scheme of(String key) {
-            for (Scheme s : values()) {
-                if (s.key.equals(key)) {
-                    return s;
-                }
-            }
-            return null;
-        }
     }
 
     /** Whether the step is fixed (stepMyr given) rather than adaptive. */

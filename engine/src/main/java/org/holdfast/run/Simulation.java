@@ -9,6 +9,7 @@ import org.holdfast.group.GroupSpec;
 import org.holdfast.integrators.DenseOutput;
 import org.holdfast.integrators.Integrator;
 import org.holdfast.units.Units;
+import org.holdfast.integrators.Scheme;
 
 /**
  * One galaxy group evolved in an expanding background: the loop. {@link RunBuilder} builds it
@@ -64,7 +65,7 @@ public final class Simulation implements RunView, AutoCloseable {
         this.history = history;
         this.system = system;
         double fixed = settings.fixedStep() ? settings.stepMyr() * Units.MYR : Double.NaN;
-        this.stepper = settings.scheme() == RunSettings.Scheme.IAS15
+        this.stepper = settings.scheme() == Scheme.IAS15
                 ? new Ias15Stepper(system, settings.accuracy(), fixed)
                 : new SplitStepper(system, Integrator.of(settings.scheme()), settings.accuracy(), fixed);
         this.frameOffset = offset;
@@ -375,7 +376,7 @@ public final class Simulation implements RunView, AutoCloseable {
     }
 
     /** The scheme in use. */
-    public RunSettings.Scheme scheme() {
+    public Scheme scheme() {
         return settings.scheme();
     }
 

@@ -14,9 +14,10 @@ import org.holdfast.group.StarsSpec;
 import org.holdfast.observe.HomeFrame;
 import org.holdfast.observe.MemberState;
 import org.holdfast.observe.ObservedReader;
-import org.holdfast.observe.Observer;
+import org.holdfast.observe.ObserverSite;
 import org.holdfast.observe.ObserverReader;
 import org.holdfast.units.Units;
+import org.holdfast.schema.Node;
 
 /**
  * Reads the members ({@code [[galaxy]]}) and the flow tracers ({@code [flow]}) of a scenario.
@@ -56,7 +57,7 @@ public final class GroupReader {
                 break;
             }
         }
-        Observer observer = firstObserved == null ? null : ObserverReader.forObserved(root, firstObserved);
+        ObserverSite observer = firstObserved == null ? null : ObserverReader.forObserved(root, firstObserved);
         Node home = observer == null ? null : homeNode(root, nodes, observer);
         double[] homePos = home == null ? null : home.vector("position_kpc", 3);
         double[] homeVel = home == null ? null
@@ -159,7 +160,7 @@ public final class GroupReader {
         return d;
     }
 
-    private static Node homeNode(Node root, List<Node> nodes, Observer observer) {
+    private static Node homeNode(Node root, List<Node> nodes, ObserverSite observer) {
         for (Node g : nodes) {
             if (observer.homeGalaxy().equals(g.string("name"))) {
                 if (g.hasInFile("observed")) {

@@ -7,6 +7,8 @@ import org.holdfast.group.GalaxySpec;
 import org.holdfast.group.GroupSpec;
 import org.holdfast.run.RunSettings;
 import org.holdfast.units.Units;
+import org.holdfast.schema.ScenarioException;
+import org.holdfast.schema.Node;
 
 /**
  * How far a run can go before rounding errors swamp the group, checked before it starts.

@@ -2,9 +2,11 @@ package org.holdfast.scenario;
 
 import java.util.Arrays;
 
-import org.holdfast.forces.CoulombLog;
+import org.holdfast.group.CoulombLog;
 import org.holdfast.run.RunSettings;
-import org.holdfast.run.RunSettings.Scheme;
+import org.holdfast.integrators.Scheme;
+import org.holdfast.schema.ScenarioException;
+import org.holdfast.schema.Node;
 
 /** Reads the {@code [run]} table of a scenario. */
 public final class RunReader {

@@ -11,6 +11,10 @@ import org.holdfast.expansion.InvalidCosmologyException;
 import org.holdfast.group.GroupSpec;
 import org.holdfast.run.RunSettings;
 import org.holdfast.uncertain.UncertainNumbers;
+import org.holdfast.schema.ScenarioException;
+import org.holdfast.schema.Overrides;
+import org.holdfast.schema.Node;
+import org.holdfast.schema.ScenarioFile;
 
 /**
  * Reads a whole scenario file: top-level {@code name} and {@code description}, then

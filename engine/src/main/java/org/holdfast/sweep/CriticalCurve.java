@@ -12,7 +12,7 @@ import java.util.Locale;
 
 import org.apache.commons.csv.CSVPrinter;
 import org.holdfast.output.Charts;
-import org.holdfast.output.Palette;
+import org.holdfast.output.ChartPalette;
 import org.knowm.xchart.XYChart;
 import org.knowm.xchart.XYSeries;
 import org.knowm.xchart.style.markers.SeriesMarkers;
@@ -108,7 +108,7 @@ public final class CriticalCurve {
                 // the bracket: a short horizontal bar through the point
                 XYSeries bar = chart.addSeries("bracket " + p.along(), new double[] {p.low(), p.high()},
                         new double[] {p.along(), p.along()});
-                bar.setLineColor(Palette.GUIDE);
+                bar.setLineColor(ChartPalette.GUIDE);
                 bar.setLineStyle(new BasicStroke(3f));
                 bar.setMarker(SeriesMarkers.NONE);
                 bar.setShowInLegend(false);
@@ -122,7 +122,7 @@ public final class CriticalCurve {
         XYSeries s = chart.addSeries(samples >= 6 ? "critical value (bars: 95% interval of the median draw)"
                 : "critical value (bars: bracket)", found.stream().mapToDouble(p -> p[0]).toArray(),
                 found.stream().mapToDouble(p -> p[1]).toArray());
-        s.setLineColor(Palette.INK);
+        s.setLineColor(ChartPalette.INK);
         s.setMarkerColor(new Color(0xC9473B));
         s.setMarker(SeriesMarkers.CIRCLE);
         s.setLineStyle(new BasicStroke(2f));

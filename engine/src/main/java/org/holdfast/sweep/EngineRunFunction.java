@@ -6,13 +6,13 @@ import java.util.List;
 import java.util.Map;
 import java.util.TreeMap;
 
-import org.holdfast.cli.Version;
+import org.holdfast.console.Version;
 import org.holdfast.fates.FateRun;
 import org.holdfast.output.SnapshotWriter;
 import org.holdfast.output.TrackWriter;
 import org.holdfast.run.RunObserver;
 import org.holdfast.run.Simulation;
-import org.holdfast.scenario.Overrides;
+import org.holdfast.schema.Overrides;
 import org.holdfast.scenario.Scenario;
 import org.holdfast.scenario.ScenarioReader;
 import org.holdfast.uncertain.UncertainNumbers;

@@ -7,10 +7,10 @@ import java.util.List;
 import java.util.Map;
 import java.util.Set;
 
-import org.holdfast.scenario.Node;
-import org.holdfast.scenario.Overrides;
-import org.holdfast.scenario.ScenarioException;
-import org.holdfast.scenario.ScenarioFile;
+import org.holdfast.schema.Node;
+import org.holdfast.schema.Overrides;
+import org.holdfast.schema.ScenarioException;
+import org.holdfast.schema.ScenarioFile;
 import org.tomlj.TomlArray;
 import org.tomlj.TomlTable;
 

@@ -17,7 +17,7 @@ import java.util.Locale;
 
 import javax.imageio.ImageIO;
 
-import org.holdfast.output.Palette;
+import org.holdfast.output.ChartPalette;
 
 /**
  * The two-key map: the fraction of runs with the chosen outcome at every grid point, one cell
@@ -98,7 +98,7 @@ final class MapPlot {
         Graphics2D gr = img.createGraphics();
         gr.setRenderingHint(RenderingHints.KEY_ANTIALIASING, RenderingHints.VALUE_ANTIALIAS_ON);
         gr.setRenderingHint(RenderingHints.KEY_TEXT_ANTIALIASING, RenderingHints.VALUE_TEXT_ANTIALIAS_ON);
-        gr.setColor(Palette.PAPER);
+        gr.setColor(ChartPalette.PAPER);
         gr.fillRect(0, 0, W, H);
         double pw = W - LEFT - RIGHT;
         double ph = H - TOP - BOTTOM;
@@ -121,12 +121,12 @@ final class MapPlot {
                     gr.drawOval((x0 + x1 - d) / 2, (y0 + y1 - d) / 2, d, d);
                 }
                 if (nx * ny <= 150 && cw > 34 && ch > 16) {
-                    gr.setColor(Palette.INK);
+                    gr.setColor(ChartPalette.INK);
                     centred(gr, String.format(Locale.ROOT, "%.2f", g[0][i][j]), (x0 + x1) / 2, (y0 + y1) / 2 + 4);
                 }
             }
         }
-        gr.setColor(Palette.INK);
+        gr.setColor(ChartPalette.INK);
         gr.setStroke(new BasicStroke(3.2f, BasicStroke.CAP_ROUND, BasicStroke.JOIN_ROUND));
         for (double[] s : contour(g[0], 0.5)) {
             gr.draw(new Line2D.Double(LEFT + (s[0] + 0.5) * cw, TOP + ph - (s[1] + 0.5) * ch,
@@ -141,7 +141,7 @@ final class MapPlot {
     }
 
     private static void ticks(Graphics2D gr, Axis ax, Axis ay, double cw, double ch, double ph) {
-        gr.setColor(Palette.INK);
+        gr.setColor(ChartPalette.INK);
         gr.setFont(new Font(Font.SANS_SERIF, Font.PLAIN, 12));
         int everyX = Math.max(1, (int) Math.ceil(ax.size() / 12.0));
         for (int i = 0; i < ax.size(); i += everyX) {
@@ -163,7 +163,7 @@ final class MapPlot {
 
     private static void legend(Graphics2D gr, SweepPlan plan) {
         gr.setFont(new Font(Font.SANS_SERIF, Font.BOLD, 17));
-        gr.setColor(Palette.INK);
+        gr.setColor(ChartPalette.INK);
         gr.drawString(title(plan) + " (" + plan.samples() + " runs per cell)", LEFT, TOP - 30);
         int bx = W - RIGHT + 30;
         int bh = H - TOP - BOTTOM - 120;
@@ -171,7 +171,7 @@ final class MapPlot {
             gr.setColor(ramp(1.0 - (double) y / (bh - 1)));
             gr.fillRect(bx, TOP + y, 22, 1);
         }
-        gr.setColor(Palette.INK);
+        gr.setColor(ChartPalette.INK);
         gr.drawRect(bx, TOP, 22, bh);
         gr.setFont(new Font(Font.SANS_SERIF, Font.PLAIN, 12));
         for (int k = 0; k <= 4; k++) {

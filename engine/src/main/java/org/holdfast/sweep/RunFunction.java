@@ -3,7 +3,7 @@ package org.holdfast.sweep;
 import java.io.Serializable;
 import java.nio.file.Path;
 
-import org.holdfast.scenario.Overrides;
+import org.holdfast.schema.Overrides;
 
 /**
  * Runs one realisation of a scenario headless and returns its fates: the one seam between the
@@ -25,7 +25,7 @@ public interface RunFunction extends Serializable {
      * @param untilGyr end of the run; NaN for the scenario's own until_gyr
      * @param snapshotDir where to write snapshots; null for none (fates only)
      * @return the fates
-     * @throws org.holdfast.scenario.ScenarioException for bad input (an unknown override key)
+     * @throws org.holdfast.schema.ScenarioException for bad input (an unknown override key)
      */
     RunOutcome run(Path scenario, Overrides overrides, long seed, long draw, boolean sample, double untilGyr,
             Path snapshotDir);

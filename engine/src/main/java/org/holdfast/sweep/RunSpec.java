@@ -4,7 +4,7 @@ import java.io.Serializable;
 import java.nio.file.Path;
 import java.util.Map;
 
-import org.holdfast.scenario.Overrides;
+import org.holdfast.schema.Overrides;
 
 /**
  * What all runs of a sweep share: the physics, whether to sample, the end time and where

@@ -13,7 +13,7 @@ import java.util.Map;
 import com.fasterxml.jackson.databind.SerializationFeature;
 
 import org.holdfast.output.RunFolder;
-import org.holdfast.scenario.ScenarioException;
+import org.holdfast.schema.ScenarioException;
 
 /**
  * Makes a sweep in a folder, or finishes one that was stopped: checks that the folder holds

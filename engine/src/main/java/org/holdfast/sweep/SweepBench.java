@@ -10,7 +10,7 @@ import java.util.Map;
 import java.util.stream.Stream;
 
 import org.holdfast.bench.BenchSuite;
-import org.holdfast.scenario.Overrides;
+import org.holdfast.schema.Overrides;
 
 /**
  * The "sweep" benchmarks: runs per second of a sweep of short runs on 1 and 2 workers (target:

@@ -11,7 +11,7 @@ import java.util.TreeMap;
 import com.fasterxml.jackson.databind.SerializationFeature;
 
 import org.holdfast.output.RunFolder;
-import org.holdfast.scenario.ScenarioException;
+import org.holdfast.schema.ScenarioException;
 
 /**
  * Combines the folders of the shards of one sweep into one folder that looks as if the sweep

@@ -10,7 +10,7 @@ import java.util.List;
 import java.util.Map;
 
 import org.holdfast.output.Charts;
-import org.holdfast.output.Palette;
+import org.holdfast.output.ChartPalette;
 import org.knowm.xchart.XYChart;
 import org.knowm.xchart.XYSeries;
 import org.knowm.xchart.style.markers.SeriesMarkers;
@@ -38,7 +38,7 @@ public final class SweepPlots {
     public static final String MAP_FILE = "map.png";
 
     /** The group's colour: the ink of the text, so that it stands apart from every member. */
-    static final Color GROUP = Palette.INK;
+    static final Color GROUP = ChartPalette.INK;
 
     /** Fate colours in the strip plot (not member colours: there, colour is the fate). */
     private static final Map<String, Color> FATE_COLOURS = Map.of(
@@ -124,7 +124,7 @@ public final class SweepPlots {
         for (int c = 0; c < curves.size(); c++) {
             Curve cv = curves.get(c);
             boolean isGroup = c == curves.size() - 1;
-            Color col = isGroup ? GROUP : Palette.member(c);
+            Color col = isGroup ? GROUP : ChartPalette.member(c);
             double dx = offset(c, curves.size(), spread);
             // one series per curve: vertical bars, separated by gaps (NaN)
             double[] bx = new double[3 * x.length];
@@ -146,7 +146,7 @@ public final class SweepPlots {
         for (int c = 0; c < curves.size(); c++) {
             Curve cv = curves.get(c);
             boolean isGroup = c == curves.size() - 1;
-            Color col = isGroup ? GROUP : Palette.member(c);
+            Color col = isGroup ? GROUP : ChartPalette.member(c);
             double dx = offset(c, curves.size(), spread);
             double[] xs = new double[x.length];
             for (int i = 0; i < x.length; i++) {
@@ -211,7 +211,7 @@ public final class SweepPlots {
             double[] xs = axis.values().stream().mapToDouble(Double::doubleValue).toArray();
             XYSeries s = chart.addSeries("no member merged or left in any run", xs, new double[xs.length]);
             s.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Scatter);
-            s.setMarkerColor(Palette.GUIDE);
+            s.setMarkerColor(ChartPalette.GUIDE);
             s.setMarker(SeriesMarkers.NONE);
         }
         return chart;

@@ -4,9 +4,9 @@ import java.nio.file.Path;
 import java.util.List;
 import java.util.Map;
 
-import org.holdfast.scenario.Overrides;
+import org.holdfast.schema.Overrides;
 import org.holdfast.scenario.Scenario;
-import org.holdfast.scenario.ScenarioException;
+import org.holdfast.schema.ScenarioException;
 import org.holdfast.scenario.ScenarioReader;
 import org.holdfast.uncertain.UncertainNumbers;
 

@@ -4,7 +4,7 @@ import java.util.Locale;
 import java.util.Set;
 import java.util.TreeSet;
 
-import org.holdfast.scenario.Node;
+import org.holdfast.schema.Node;
 import org.tomlj.TomlTable;
 
 /**

@@ -8,8 +8,8 @@ import java.util.Map;
 import java.util.stream.Collectors;
 
 import org.apache.commons.rng.UniformRandomProvider;
-import org.holdfast.scenario.Node;
-import org.holdfast.scenario.NumberReader;
+import org.holdfast.schema.Node;
+import org.holdfast.schema.NumberReader;
 import org.tomlj.TomlTable;
 
 /**

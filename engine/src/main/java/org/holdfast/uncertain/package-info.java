@@ -3,7 +3,7 @@
  * inline table such as {@code { mean = 770, sigma = 40 }} (normal),
  * {@code { median = 1.5e12, sigma_dex = 0.2 }} (log-normal) or {@code { min = -1.3, max = -0.7 }}
  * (uniform). {@link org.holdfast.uncertain.UncertainNumbers} is the
- * {@link org.holdfast.scenario.NumberReader} that understands them: it returns either each
+ * {@link org.holdfast.schema.NumberReader} that understands them: it returns either each
  * distribution's central value or a reproducible random draw, and records which keys were
  * uncertain and what value was used.
  *

@@ -2,7 +2,7 @@ package org.holdfast.weighing;
 
 import org.holdfast.expansion.Cosmology;
 import org.holdfast.expansion.CosmologyReader;
-import org.holdfast.scenario.Node;
+import org.holdfast.schema.Node;
 
 /**
  * A weighing file: the pair, optionally the cosmology and an independent mass, any number an

@@ -24,7 +24,7 @@ class ClosedFormHistoriesTest {
     void flatMatterLambdaMatchesTheClosedForm() {
         double om = 0.3;
         double ol = 0.7;
-        ExpansionTable t = new Cosmology(H0, om, 0, 0, new CosmologicalConstant()).solve();
+        ExpansionTable t = new Cosmology(H0, om, 0, 0, new ConstantW(-1)).solve();
         double h0 = t.cosmology().h0PerGyr();
         double age = 2 / (3 * h0 * Math.sqrt(ol)) * asinh(Math.sqrt(ol / om));
         assertEquals(13.467, age, 5e-4, "the quoted check value");
@@ -55,7 +55,7 @@ class ClosedFormHistoriesTest {
     /** Einstein–de Sitter: a = (t/t0)^(2/3), t0 = 2/(3 H0) = 9.312 Gyr for H0 = 70 (common practice). */
     @Test
     void einsteinDeSitter() {
-        ExpansionTable t = new Cosmology(H0, 1.0, 0, 0, new CosmologicalConstant()).solve();
+        ExpansionTable t = new Cosmology(H0, 1.0, 0, 0, new ConstantW(-1)).solve();
         double t0 = 2 / (3 * t.cosmology().h0PerGyr());
         assertEquals(9.312, t0, 5e-4);
         assertEquals(t0, t.ageGyr(), 1e-12 * t0);
@@ -78,7 +78,7 @@ class ClosedFormHistoriesTest {
     @Test
     void closedMatterUniverseIsTheCycloid() {
         double om = 2.0;
-        ExpansionTable t = new Cosmology(H0, om, 0, 1 - om, new CosmologicalConstant()).solve();
+        ExpansionTable t = new Cosmology(H0, om, 0, 1 - om, new ConstantW(-1)).solve();
         double h0 = t.cosmology().h0PerGyr();
         double amp = om / (2 * (om - 1));
         double b = om / (2 * h0 * Math.pow(om - 1, 1.5));

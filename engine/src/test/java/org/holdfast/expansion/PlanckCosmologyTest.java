@@ -13,7 +13,7 @@ class PlanckCosmologyTest {
     private static Cosmology planck() {
         double h0 = 67.66;
         double omegaR = Cosmology.radiationFromCmb(h0, Cosmology.T_CMB_K, Cosmology.N_EFF);
-        return new Cosmology(h0, 0.3111, omegaR, 0, new CosmologicalConstant());
+        return new Cosmology(h0, 0.3111, omegaR, 0, new ConstantW(-1));
     }
 
     /**

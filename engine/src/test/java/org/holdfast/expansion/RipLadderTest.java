@@ -6,7 +6,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.List;
 
-import org.holdfast.fates.Binding;
+import org.holdfast.forces.Binding;
 import org.holdfast.units.Units;
 import org.junit.jupiter.api.Test;
 
@@ -75,7 +75,7 @@ class RipLadderTest {
 
     @Test
     void noRipNoLadder() {
-        ExpansionTable lambda = new Cosmology(70, 0.3, 0, 0, new CosmologicalConstant()).solve();
+        ExpansionTable lambda = new Cosmology(70, 0.3, 0, 0, new ConstantW(-1)).solve();
         assertTrue(RipLadder.of(lambda, "g", 2e12, 500).isEmpty());
     }
 }

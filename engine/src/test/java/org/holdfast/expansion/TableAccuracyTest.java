@@ -33,7 +33,7 @@ class TableAccuracyTest {
     private static double worstLnAError(double stepScale) {
         double om = 0.3;
         double ol = 0.7;
-        Cosmology c = new Cosmology(70, om, 0, 0, new CosmologicalConstant());
+        Cosmology c = new Cosmology(70, om, 0, 0, new ConstantW(-1));
         ExpansionTable t = new TableBuilder(c, new TableBuilder.Options(100, stepScale, false)).build();
         double h0 = c.h0PerGyr();
         double age = t.ageGyr();
@@ -83,7 +83,7 @@ class TableAccuracyTest {
      */
     @Test
     void negativeDarkEnergyRecollapsesSymmetrically() {
-        Cosmology c = new Cosmology(70, 1.2, 0, 0, new CosmologicalConstant());
+        Cosmology c = new Cosmology(70, 1.2, 0, 0, new ConstantW(-1));
         ExpansionTable t = c.solve();
         double tMax = t.maxExpansionGyr().getAsDouble();
         assertEquals(2 * tMax + t.ageGyr(), t.crunchGyr().getAsDouble(), 1e-12 * tMax);
@@ -102,7 +102,7 @@ class TableAccuracyTest {
     /** H^2 reaching 0 going back in time means a bounce, not a Big Bang: a clear refusal. */
     @Test
     void aBounceIsRefused() {
-        Cosmology c = new Cosmology(70, 0.01, 0, -1.5, new CosmologicalConstant());
+        Cosmology c = new Cosmology(70, 0.01, 0, -1.5, new ConstantW(-1));
         InvalidCosmologyException e = assertThrows(InvalidCosmologyException.class, c::solve);
         assertTrue(e.getMessage().contains("no Big Bang"), e.getMessage());
     }
@@ -110,18 +110,18 @@ class TableAccuracyTest {
     @Test
     void unphysicalParametersNameThemselves() {
         assertEquals("h0", assertThrows(InvalidCosmologyException.class,
-                () -> new Cosmology(-70, 0.3, 0, 0, new CosmologicalConstant())).parameter());
+                () -> new Cosmology(-70, 0.3, 0, 0, new ConstantW(-1))).parameter());
         assertEquals("omega_m", assertThrows(InvalidCosmologyException.class,
-                () -> new Cosmology(70, -0.3, 0, 0, new CosmologicalConstant())).parameter());
+                () -> new Cosmology(70, -0.3, 0, 0, new ConstantW(-1))).parameter());
         assertEquals("omega_k", assertThrows(InvalidCosmologyException.class,
-                () -> new Cosmology(70, 0.3, 0, Double.NaN, new CosmologicalConstant())).parameter());
+                () -> new Cosmology(70, 0.3, 0, Double.NaN, new ConstantW(-1))).parameter());
         assertEquals("omega_m", assertThrows(InvalidCosmologyException.class,
-                () -> new Cosmology(70, 0, 0, 0, new CosmologicalConstant())).parameter());
+                () -> new Cosmology(70, 0, 0, 0, new ConstantW(-1))).parameter());
     }
 
     @Test
     void lookupsBeforeTheBigBangAreErrors() {
-        ExpansionTable t = new Cosmology(70, 0.3, 0, 0, new CosmologicalConstant()).solve();
+        ExpansionTable t = new Cosmology(70, 0.3, 0, 0, new ConstantW(-1)).solve();
         ExpansionRangeException e = assertThrows(ExpansionRangeException.class, () -> t.scaleFactor(-20));
         assertTrue(e.getMessage().contains("before the Big Bang"), e.getMessage());
         assertEquals(-20, e.tGyr());

@@ -13,7 +13,7 @@ import org.holdfast.group.GalaxySpec;
 import org.holdfast.group.GroupSpec;
 import org.holdfast.group.HaloSpec;
 import org.holdfast.run.RunSettings;
-import org.holdfast.run.RunSettings.Scheme;
+import org.holdfast.integrators.Scheme;
 import org.holdfast.run.Simulation;
 import org.holdfast.units.Units;
 

@@ -5,6 +5,7 @@ import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import org.holdfast.units.Units;
+import org.holdfast.forces.Binding;
 import org.junit.jupiter.api.Test;
 
 /** Binding where it used to go wrong: a negative k, radial orbits, the judgement of "gone for good". */

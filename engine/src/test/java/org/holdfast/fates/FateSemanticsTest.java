@@ -7,7 +7,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.util.List;
 import java.util.function.DoubleUnaryOperator;
 
-import org.holdfast.expansion.CosmologicalConstant;
+import org.holdfast.expansion.ConstantW;
 import org.holdfast.expansion.Cosmology;
 import org.holdfast.expansion.ExpansionHistory;
 import org.holdfast.expansion.ExpansionTable;
@@ -18,7 +18,7 @@ import org.holdfast.group.HaloSpec;
 import org.holdfast.run.ArrayRunView;
 import org.holdfast.run.RunEvent;
 import org.holdfast.run.RunSettings;
-import org.holdfast.run.RunSettings.Scheme;
+import org.holdfast.integrators.Scheme;
 import org.holdfast.run.Simulation;
 import org.holdfast.run.StopReason;
 import org.holdfast.units.Units;
@@ -145,7 +145,7 @@ class FateSemanticsTest {
     @Test
     void pureInfallAlongASkewLineRunsAndMerges() {
         // radial orbits are the timing argument's geometry: L^2 is round-off here; the run must not fail
-        ExpansionTable t = new Cosmology(70, 0.3, 0, 0, new CosmologicalConstant()).solve(40);
+        ExpansionTable t = new Cosmology(70, 0.3, 0, 0, new ConstantW(-1)).solve(40);
         double[] u = {0.6, -0.48, 0.64};
         double n = Math.sqrt(u[0] * u[0] + u[1] * u[1] + u[2] * u[2]);
         double[] pos = new double[3];

@@ -3,7 +3,7 @@ package org.holdfast.fates;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import org.holdfast.expansion.CosmologicalConstant;
+import org.holdfast.expansion.ConstantW;
 import org.holdfast.expansion.Cosmology;
 import org.holdfast.expansion.ExpansionTable;
 import org.holdfast.units.Units;
@@ -24,7 +24,7 @@ class TimingArgumentTest {
         // H0 = 70, Omega_Lambda = 0.7 as in the check values; Omega_m = 0.2 and Omega_k = 0.1 only make the universe
         // old enough (over 13.73 Gyr) to integrate back that far. The Lambda force k = Omega_Lambda H0^2 does not
         // depend on Omega_m.
-        ExpansionTable t = new Cosmology(70, 0.2, 0, 0.1, new CosmologicalConstant()).solve(20);
+        ExpansionTable t = new Cosmology(70, 0.2, 0, 0.1, new ConstantW(-1)).solve(20);
         assertTrue(t.ageGyr() > 13.73, "age " + t.ageGyr());
         pair = new TimingArgument(t, 784, -130, 13.73);
         withLambda = pair.solve(true);

@@ -6,7 +6,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.util.ArrayList;
 import java.util.List;
 
-import org.holdfast.expansion.CosmologicalConstant;
+import org.holdfast.expansion.ConstantW;
 import org.holdfast.expansion.Cosmology;
 import org.holdfast.expansion.ExpansionTable;
 import org.holdfast.fates.Fate;
@@ -14,7 +14,7 @@ import org.holdfast.group.GalaxySpec;
 import org.holdfast.group.GroupSpec;
 import org.holdfast.group.HaloSpec;
 import org.holdfast.run.RunSettings;
-import org.holdfast.run.RunSettings.Scheme;
+import org.holdfast.integrators.Scheme;
 import org.holdfast.run.Simulation;
 import org.holdfast.units.Units;
 import org.junit.jupiter.api.Test;
@@ -27,7 +27,7 @@ class ZeroGravityRadiusTest {
         // zero-gravity radius R = (G M / (Omega_Lambda H0^2))^(1/3) (Chernin and collaborators; Pavlidou & Tomaras
         // 2014, JCAP — reference from memory): 1711.8 kpc for M = 4e12 Msun, H0 = 70, Omega_Lambda = 0.7. At rest
         // inside it gravity wins, outside the Lambda force does.
-        ExpansionTable t = new Cosmology(70, 0.3, 0, 0, new CosmologicalConstant()).solve(120);
+        ExpansionTable t = new Cosmology(70, 0.3, 0, 0, new ConstantW(-1)).solve(120);
         double host = 4e12;
         double r0 = Math.cbrt(Units.G * host / (0.7 * Math.pow(Units.hubbleToPerGyr(70), 2)));
         assertEquals(1711.8, r0, 0.5);

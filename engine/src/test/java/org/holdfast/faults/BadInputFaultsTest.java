@@ -19,8 +19,8 @@ import io.jhdf.HdfFile;
 import org.holdfast.cli.CommandRunner;
 import org.holdfast.expansion.CosmologyReader;
 import org.holdfast.expansion.ExpansionTable;
-import org.holdfast.scenario.Overrides;
-import org.holdfast.scenario.ScenarioFile;
+import org.holdfast.schema.Overrides;
+import org.holdfast.schema.ScenarioFile;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 

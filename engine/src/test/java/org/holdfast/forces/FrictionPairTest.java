@@ -7,6 +7,7 @@ import java.util.Map;
 
 import org.holdfast.halos.HernquistHalo;
 import org.holdfast.units.Units;
+import org.holdfast.group.CoulombLog;
 import org.junit.jupiter.api.Test;
 
 /** Dynamical friction between comparable masses: each pair braked once, the Coulomb logarithm aware of the mass ratio. */

@@ -8,9 +8,9 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 
-import org.holdfast.scenario.Node;
-import org.holdfast.scenario.Overrides;
-import org.holdfast.scenario.ScenarioFile;
+import org.holdfast.schema.Node;
+import org.holdfast.schema.Overrides;
+import org.holdfast.schema.ScenarioFile;
 import org.holdfast.uncertain.UncertainNumbers;
 import org.junit.jupiter.api.Test;
 
@@ -22,7 +22,7 @@ class DemoScenarioTest {
     /** Reads every observed member; returns each one's distance from the home centre in kpc. */
     private static List<Double> homeDistances(UncertainNumbers reader, List<String> warnings) {
         Node root = ScenarioFile.open(DEMO, Overrides.none(), reader);
-        Observer observer = ObserverReader.read(root.requireTable("observer"));
+        ObserverSite observer = ObserverReader.read(root.requireTable("observer"));
         HomeFrame frame = new HomeFrame(observer);
         List<Double> out = new ArrayList<>();
         boolean homeFound = false;

@@ -9,16 +9,16 @@ import java.util.List;
 
 import org.apache.commons.rng.UniformRandomProvider;
 import org.apache.commons.rng.simple.RandomSource;
-import org.holdfast.scenario.NumberReader;
-import org.holdfast.scenario.Overrides;
-import org.holdfast.scenario.ScenarioFile;
+import org.holdfast.schema.NumberReader;
+import org.holdfast.schema.Overrides;
+import org.holdfast.schema.ScenarioFile;
 import org.holdfast.units.Units;
 import org.junit.jupiter.api.Test;
 
 /** From what the observer sees to states relative to the home centre. */
 class HomeFrameTest {
 
-    private static final HomeFrame DEFAULT = new HomeFrame(Observer.defaults("Ossel"));
+    private static final HomeFrame DEFAULT = new HomeFrame(ObserverSite.defaults("Ossel"));
 
     private static ObservedMember observed(String inline) {
         return ObservedReader.read(ScenarioFile.parse(Path.of("home.toml"), "observed = " + inline + "\n",
@@ -69,7 +69,7 @@ class HomeFrameTest {
         // 1 mas/yr at 1 kpc is 1 au/yr = 4.740470 km/s (IAU 2012 au, Julian year; project
         // physics references). At RA 0, Dec 0 the direction of increasing RA is ICRS +y, which
         // the published Hipparcos matrix (ESA 1997, sec. 1.5.3) takes to its second column.
-        HomeFrame still = new HomeFrame(new Observer("Ossel", 8.122, 0, 0, 0, 0));
+        HomeFrame still = new HomeFrame(new ObserverSite("Ossel", 8.122, 0, 0, 0, 0));
         MemberState s = still.toHome(observed("{ ra_deg = 0, dec_deg = 0, distance_kpc = 2, v_los_kms = 0,"
                 + " pm_ra_mas_yr = 1, pm_dec_mas_yr = 0 }"));
         double speed = 2 * 4.740470;

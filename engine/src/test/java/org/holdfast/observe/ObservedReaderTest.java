@@ -7,11 +7,11 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.nio.file.Path;
 
-import org.holdfast.scenario.Node;
-import org.holdfast.scenario.NumberReader;
-import org.holdfast.scenario.Overrides;
-import org.holdfast.scenario.ScenarioException;
-import org.holdfast.scenario.ScenarioFile;
+import org.holdfast.schema.Node;
+import org.holdfast.schema.NumberReader;
+import org.holdfast.schema.Overrides;
+import org.holdfast.schema.ScenarioException;
+import org.holdfast.schema.ScenarioFile;
 import org.holdfast.uncertain.UncertainNumbers;
 import org.joml.Vector3d;
 import org.junit.jupiter.api.Test;
@@ -178,9 +178,9 @@ class ObservedReaderTest {
 
     @Test
     void observerDefaultsAndTheirErrors() {
-        Observer o = ObserverReader.read(ScenarioFile.parse(FILE, "[observer]\ngalaxy = \"Vell\"\n",
+        ObserverSite o = ObserverReader.read(ScenarioFile.parse(FILE, "[observer]\ngalaxy = \"Vell\"\n",
                 Overrides.none(), NumberReader.PLAIN).requireTable("observer"));
-        assertEquals(Observer.defaults("Vell"), o);
+        assertEquals(ObserverSite.defaults("Vell"), o);
 
         ScenarioException e = assertThrows(ScenarioException.class, () -> ObserverReader.read(ScenarioFile.parse(
                 FILE, "[observer]\ngalaxy = \"Vell\"\ndistance_to_centre_kpc = 8\nheight_kpc = 9\n",
@@ -193,9 +193,9 @@ class ObservedReaderTest {
                 .requireTable("observer")));
         assertTrue(e.getMessage().contains("missing required key 'observer.galaxy'"), e.getMessage());
 
-        Observer given = ObserverReader.read(ScenarioFile.parse(FILE, "[observer]\ngalaxy = \"Vell\"\n"
+        ObserverSite given = ObserverReader.read(ScenarioFile.parse(FILE, "[observer]\ngalaxy = \"Vell\"\n"
                 + "distance_to_centre_kpc = 8.178\nheight_kpc = 0\nvelocity_kms = [11.1, 12.24, 7.25]\n",
                 Overrides.none(), NumberReader.PLAIN).requireTable("observer"));
-        assertEquals(new Observer("Vell", 8.178, 0, 11.1, 12.24, 7.25), given);
+        assertEquals(new ObserverSite("Vell", 8.178, 0, 11.1, 12.24, 7.25), given);
     }
 }

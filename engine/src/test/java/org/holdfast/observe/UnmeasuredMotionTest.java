@@ -9,7 +9,7 @@ import java.nio.file.Path;
 import java.util.List;
 
 import org.holdfast.group.GalaxySpec;
-import org.holdfast.scenario.Overrides;
+import org.holdfast.schema.Overrides;
 import org.holdfast.scenario.Scenario;
 import org.holdfast.scenario.ScenarioReader;
 import org.holdfast.uncertain.UncertainNumbers;

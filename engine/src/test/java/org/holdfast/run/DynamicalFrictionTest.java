@@ -5,11 +5,11 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.List;
 
-import org.holdfast.forces.CoulombLog;
+import org.holdfast.group.CoulombLog;
 import org.holdfast.group.GalaxySpec;
 import org.holdfast.group.GroupSpec;
 import org.holdfast.group.HaloSpec;
-import org.holdfast.run.RunSettings.Scheme;
+import org.holdfast.integrators.Scheme;
 import org.holdfast.units.Units;
 import org.junit.jupiter.api.Test;
 

@@ -12,7 +12,7 @@ import org.holdfast.expansion.ExpansionHistory;
 import org.holdfast.group.GalaxySpec;
 import org.holdfast.group.GroupSpec;
 import org.holdfast.group.HaloSpec;
-import org.holdfast.run.RunSettings.Scheme;
+import org.holdfast.integrators.Scheme;
 import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 

@@ -10,7 +10,7 @@ import org.holdfast.group.GroupSpec;
 import org.holdfast.group.HaloSpec;
 import org.holdfast.halos.HaloProfile;
 import org.holdfast.halos.Halos;
-import org.holdfast.run.RunSettings.Scheme;
+import org.holdfast.integrators.Scheme;
 import org.holdfast.units.Units;
 import org.junit.jupiter.api.Test;
 

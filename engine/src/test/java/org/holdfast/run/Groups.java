@@ -6,7 +6,7 @@ import java.util.List;
 import org.holdfast.group.GalaxySpec;
 import org.holdfast.group.GroupSpec;
 import org.holdfast.group.HaloSpec;
-import org.holdfast.run.RunSettings.Scheme;
+import org.holdfast.integrators.Scheme;
 
 /** Small builders for test groups (invented members). */
 final class Groups {

@@ -7,7 +7,7 @@ import java.util.List;
 
 import org.holdfast.group.FlowSpec;
 import org.holdfast.group.GroupSpec;
-import org.holdfast.run.RunSettings.Scheme;
+import org.holdfast.integrators.Scheme;
 import org.holdfast.units.Units;
 import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;

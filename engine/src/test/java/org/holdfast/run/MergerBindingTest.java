@@ -9,7 +9,7 @@ import org.holdfast.forces.KernelTable;
 import org.holdfast.group.GalaxySpec;
 import org.holdfast.group.HaloSpec;
 import org.holdfast.halos.HernquistHalo;
-import org.holdfast.run.RunSettings.Scheme;
+import org.holdfast.integrators.Scheme;
 import org.holdfast.units.Units;
 import org.junit.jupiter.api.Test;
 

@@ -13,7 +13,7 @@ import org.holdfast.group.HaloSpec;
 import org.holdfast.group.StarsSpec;
 import org.holdfast.halos.Halos;
 import org.holdfast.halos.PlummerHalo;
-import org.holdfast.run.RunSettings.Scheme;
+import org.holdfast.integrators.Scheme;
 import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 

@@ -5,7 +5,7 @@ import java.util.List;
 
 import org.holdfast.group.GalaxySpec;
 import org.holdfast.group.GroupSpec;
-import org.holdfast.run.RunSettings.Scheme;
+import org.holdfast.integrators.Scheme;
 import org.holdfast.units.Units;
 
 /** Runs a group forward with a fixed step, then from its end state back to the start. */

@@ -5,12 +5,13 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.util.Arrays;
 import java.util.List;
 
-import org.holdfast.forces.CoulombLog;
+import org.holdfast.group.CoulombLog;
 import org.holdfast.group.GalaxySpec;
 import org.holdfast.group.GroupSpec;
 import org.holdfast.group.HaloSpec;
 import org.holdfast.group.StarsSpec;
 import org.holdfast.halos.HaloProfile;
+import org.holdfast.integrators.Scheme;
 import org.junit.jupiter.api.Test;
 
 /**
@@ -25,7 +26,7 @@ class TracerAccuracyTest {
         GroupSpec g = new GroupSpec(List.of(new GalaxySpec("Wend", 1e12, new double[] {0, 0, 0}, new double[] {0, 0, 0},
                 new HaloSpec("nfw", Double.NaN, Double.NaN, 10, Double.NaN),
                 new StarsSpec(400, "disk", 4.5, new double[] {0, 0, 1}, 10))), null);
-        RunSettings s = new RunSettings(0, 10, RunSettings.Scheme.IAS15, 1e-9, Double.NaN, 1e6, false, false, 3, false,
+        RunSettings s = new RunSettings(0, 10, Scheme.IAS15, 1e-9, Double.NaN, 1e6, false, false, 3, false,
                 CoulombLog.DEFAULT, 0);
         try (Simulation sim = Simulation.create(g, s, FlatLambdaHistory.standard(), 1)) {
             HaloProfile h = sim.system().bodies.halo[0];

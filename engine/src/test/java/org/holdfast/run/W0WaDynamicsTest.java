@@ -10,7 +10,7 @@ import org.holdfast.expansion.ExpansionTable;
 import org.holdfast.expansion.W0WaDarkEnergy;
 import org.holdfast.group.FlowSpec;
 import org.holdfast.group.GroupSpec;
-import org.holdfast.run.RunSettings.Scheme;
+import org.holdfast.integrators.Scheme;
 import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 

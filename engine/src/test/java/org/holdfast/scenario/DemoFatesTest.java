@@ -10,6 +10,7 @@ import org.holdfast.fates.FateTracker.Verdict;
 import org.holdfast.fates.MemberFate;
 import org.holdfast.fates.Fate;
 import org.holdfast.uncertain.UncertainNumbers;
+import org.holdfast.schema.Overrides;
 import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 

@@ -10,6 +10,7 @@ import org.holdfast.fates.FateRun;
 import org.holdfast.group.GalaxySpec;
 import org.holdfast.run.StopReason;
 import org.holdfast.uncertain.UncertainNumbers;
+import org.holdfast.schema.Overrides;
 import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 

@@ -12,6 +12,7 @@ import org.holdfast.run.RunObserver;
 import org.holdfast.run.RunView;
 import org.holdfast.units.Units;
 import org.holdfast.uncertain.UncertainNumbers;
+import org.holdfast.schema.Overrides;
 import org.junit.jupiter.api.Test;
 
 /** The shipped tethered pair is on the circular orbit its comment claims. */

@@ -9,7 +9,7 @@ import java.util.ArrayList;
 import java.util.List;
 
 import org.holdfast.cli.CommandRunner;
-import org.holdfast.scenario.Overrides;
+import org.holdfast.schema.Overrides;
 import org.holdfast.scenario.Scenario;
 import org.holdfast.scenario.ScenarioReader;
 import org.holdfast.uncertain.UncertainNumbers;

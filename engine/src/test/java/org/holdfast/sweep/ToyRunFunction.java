@@ -16,9 +16,9 @@ import org.apache.commons.rng.simple.RandomSource;
 import org.holdfast.group.GalaxySpec;
 import org.holdfast.group.GroupSpec;
 import org.holdfast.scenario.GroupReader;
-import org.holdfast.scenario.Node;
-import org.holdfast.scenario.Overrides;
-import org.holdfast.scenario.ScenarioFile;
+import org.holdfast.schema.Node;
+import org.holdfast.schema.Overrides;
+import org.holdfast.schema.ScenarioFile;
 
 /**
  * A cheap, deterministic stand-in for the physics, for tests of the sweep machinery only (not

@@ -6,7 +6,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.util.List;
 import java.util.function.DoubleUnaryOperator;
 
-import org.holdfast.expansion.CosmologicalConstant;
+import org.holdfast.expansion.ConstantW;
 import org.holdfast.expansion.Cosmology;
 import org.holdfast.expansion.ExpansionTable;
 import org.junit.jupiter.api.Test;
@@ -14,7 +14,7 @@ import org.junit.jupiter.api.Test;
 /** The likelihood of the strength of dark energy, and the spread of draws. */
 class DarkEnergyBoundTest {
 
-    static final ExpansionTable H = new Cosmology(70, 0.3, 0, 0, new CosmologicalConstant()).solve(1);
+    static final ExpansionTable H = new Cosmology(70, 0.3, 0, 0, new ConstantW(-1)).solve(1);
     static final DoubleUnaryOperator K = t -> Background.DARK_ENERGY.coefficient(H, t);
 
     @Test

@@ -5,16 +5,16 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.List;
 
-import org.holdfast.expansion.CosmologicalConstant;
+import org.holdfast.expansion.ConstantW;
 import org.holdfast.expansion.Cosmology;
 import org.holdfast.expansion.ExpansionTable;
-import org.holdfast.forces.CoulombLog;
+import org.holdfast.group.CoulombLog;
 import org.holdfast.group.GalaxySpec;
 import org.holdfast.group.GroupSpec;
 import org.holdfast.group.HaloSpec;
 import org.holdfast.run.RunObserver;
 import org.holdfast.run.RunSettings;
-import org.holdfast.run.RunSettings.Scheme;
+import org.holdfast.integrators.Scheme;
 import org.holdfast.run.RunView;
 import org.holdfast.run.Simulation;
 import org.junit.jupiter.api.Test;
@@ -27,7 +27,7 @@ import org.junit.jupiter.api.Test;
  */
 class EngineReturnTest {
 
-    static final ExpansionTable H = new Cosmology(70, 0.3, 0, 0, new CosmologicalConstant()).solve(1);
+    static final ExpansionTable H = new Cosmology(70, 0.3, 0, 0, new ConstantW(-1)).solve(1);
 
     /** The smallest separation of an engine run back to the Big Bang and when it happened. */
     static double[] runBack(double mass, double r, double vrKms, double vtKms, double age, boolean de, boolean matter,

@@ -5,7 +5,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.List;
 
-import org.holdfast.expansion.CosmologicalConstant;
+import org.holdfast.expansion.ConstantW;
 import org.holdfast.expansion.Cosmology;
 import org.holdfast.expansion.ExpansionTable;
 import org.holdfast.units.Units;
@@ -31,7 +31,7 @@ class FlowCurveTest {
 
     @Test
     void darkEnergyPushesTheFlowOutwardAndShrinksTheZeroVelocityRadius() {
-        ExpansionTable h = new Cosmology(70, 0.3, 0, 0, new CosmologicalConstant()).solve(1);
+        ExpansionTable h = new Cosmology(70, 0.3, 0, 0, new ConstantW(-1)).solve(1);
         FlowCurve none = new FlowCurve(t -> 0.0, h.ageGyr(), 300, 5000, 60);
         FlowCurve de = new FlowCurve(t -> Background.DARK_ENERGY.coefficient(h, t), h.ageGyr(), 300, 5000, 60);
         assertTrue(de.zeroVelocityKpc(3e12) < none.zeroVelocityKpc(3e12));
@@ -40,7 +40,7 @@ class FlowCurveTest {
 
     @Test
     void theFitFindsTheMassThatMadeNoiselessData() {
-        ExpansionTable h = new Cosmology(70, 0.3, 0, 0, new CosmologicalConstant()).solve(1);
+        ExpansionTable h = new Cosmology(70, 0.3, 0, 0, new ConstantW(-1)).solve(1);
         FlowCurve c = new FlowCurve(t -> Background.DARK_ENERGY.coefficient(h, t), h.ageGyr(), 150, 6000, 60);
         int n = 12;
         double[] r = new double[n];

@@ -4,7 +4,7 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import org.holdfast.expansion.CosmologicalConstant;
+import org.holdfast.expansion.ConstantW;
 import org.holdfast.expansion.Cosmology;
 import org.holdfast.expansion.ExpansionTable;
 import org.holdfast.fates.TimingArgument;
@@ -24,7 +24,7 @@ class TimingSolverTest {
     static final PairMotion PLH2013 = new PairMotion(770, -109.3, 0, 13.798);
 
     static ExpansionTable planck2013() {
-        return new Cosmology(67.3, 0.314, 0, 0, new CosmologicalConstant()).solve(1);
+        return new Cosmology(67.3, 0.314, 0, 0, new ConstantW(-1)).solve(1);
     }
 
     @Test
@@ -71,7 +71,7 @@ class TimingSolverTest {
 
     @Test
     void theRadialLimitIsTodaysRadialAnswer() {
-        ExpansionTable h = new Cosmology(70, 0.3, 0, 0, new CosmologicalConstant()).solve(1);
+        ExpansionTable h = new Cosmology(70, 0.3, 0, 0, new ConstantW(-1)).solve(1);
         TimingArgument radial = new TimingArgument(h, 784, -130, 13.0);
         double engineDe = radial.solve(true).massMsun();
         double engineNone = radial.solve(false).massMsun();

@@ -10,7 +10,7 @@ import java.util.Locale;
 import java.util.Map;
 
 import org.holdfast.render.CameraPose;
-import org.holdfast.scenario.ScenarioException;
+import org.holdfast.schema.ScenarioException;
 
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;

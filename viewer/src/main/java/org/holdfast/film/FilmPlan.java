@@ -6,14 +6,14 @@ import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 
 import org.holdfast.replay.RunArchive;
-import org.holdfast.replay.RunFrameSource;
-import org.holdfast.scenario.Node;
-import org.holdfast.scenario.NumberReader;
-import org.holdfast.scenario.Overrides;
-import org.holdfast.scenario.ScenarioException;
-import org.holdfast.scenario.ScenarioFile;
-import org.holdfast.window.CameraSpec;
-import org.holdfast.window.Projection;
+import org.holdfast.window.RunFrameSource;
+import org.holdfast.schema.Node;
+import org.holdfast.schema.NumberReader;
+import org.holdfast.schema.Overrides;
+import org.holdfast.schema.ScenarioException;
+import org.holdfast.schema.ScenarioFile;
+import org.holdfast.render.CameraSpec;
+import org.holdfast.render.ProjectionKind;
 
 /**
  * Decides the film {@code holdfast render} makes. The {@code [film]} table comes from the film
@@ -111,7 +111,7 @@ public final class FilmPlan {
             } catch (IllegalArgumentException e) {
                 throw new ScenarioException("--camera", null, e.getMessage());
             }
-            var c = cam.camera(Projection.FLAT);
+            var c = cam.camera(ProjectionKind.FLAT);
             CameraTrack fixed = (s, dest) -> RunFrameSource.poseOf(c, dest);
             spec = spec.withCamera(fixed, null);
         }

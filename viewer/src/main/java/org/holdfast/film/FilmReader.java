@@ -9,8 +9,8 @@ import java.util.Set;
 import org.holdfast.render.Overlay;
 import org.holdfast.render.Stretch;
 import org.holdfast.render.projection.DomeProjection;
-import org.holdfast.scenario.Node;
-import org.holdfast.scenario.ScenarioException;
+import org.holdfast.schema.Node;
+import org.holdfast.schema.ScenarioException;
 import org.joml.Vector3d;
 
 /**

@@ -21,7 +21,7 @@ import org.holdfast.render.RenderSettings;
 import org.holdfast.replay.ReplayScene;
 import org.holdfast.replay.RunArchive;
 import org.holdfast.replay.TemporaryRun;
-import org.holdfast.scenario.ScenarioException;
+import org.holdfast.schema.ScenarioException;
 import org.holdfast.window.Screenshots;
 
 import picocli.CommandLine.Command;

@@ -8,7 +8,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 
-import org.holdfast.cli.Version;
+import org.holdfast.console.Version;
 import org.holdfast.fates.FateRun;
 import org.holdfast.fates.FateTracker;
 import org.holdfast.output.RunFolder;
@@ -18,9 +18,9 @@ import org.holdfast.run.RunEvent;
 import org.holdfast.run.RunObserver;
 import org.holdfast.run.RunView;
 import org.holdfast.run.Simulation;
-import org.holdfast.scenario.Overrides;
+import org.holdfast.schema.Overrides;
 import org.holdfast.scenario.Scenario;
-import org.holdfast.scenario.ScenarioException;
+import org.holdfast.schema.ScenarioException;
 import org.holdfast.scenario.ScenarioReader;
 import org.holdfast.uncertain.UncertainNumbers;
 

@@ -23,7 +23,7 @@ import org.holdfast.output.SnapshotWriter;
 import org.holdfast.output.TrackWriter;
 import org.holdfast.render.FateEvent;
 import org.holdfast.run.RunEvent;
-import org.holdfast.scenario.ScenarioException;
+import org.holdfast.schema.ScenarioException;
 
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
@@ -119,7 +119,7 @@ public final class RunArchive {
     }
 
     /** Fate events of a run still going, as they stand, used until the summary exists. */
-    void useEventsUntilSummary(List<FateEvent> provisional) {
+    public void useEventsUntilSummary(List<FateEvent> provisional) {
         if (!summaryRead) {
             List<FateEvent> sorted = new ArrayList<>(provisional);
             sorted.sort((a, b) -> Double.compare(a.tGyr(), b.tGyr()));

@@ -5,7 +5,7 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 
 import org.holdfast.expansion.ConstantW;
-import org.holdfast.expansion.CosmologicalConstant;
+import org.holdfast.expansion.ConstantW;
 import org.holdfast.expansion.Cosmology;
 import org.holdfast.expansion.DarkEnergyModel;
 import org.holdfast.expansion.ExpansionTable;
@@ -57,7 +57,7 @@ final class RunCosmology {
         double w0 = m.path("w0").asDouble();
         double wa = m.path("wa").asDouble();
         if (wa == 0) {
-            return w0 == -1.0 ? new CosmologicalConstant() : new ConstantW(w0);
+            return w0 == -1.0 ? new ConstantW(-1) : new ConstantW(w0);
         }
         return new W0WaDarkEnergy(w0, wa);
     }

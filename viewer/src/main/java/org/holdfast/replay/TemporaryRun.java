@@ -12,15 +12,15 @@ import java.util.concurrent.CountDownLatch;
 import java.util.concurrent.TimeUnit;
 import java.util.stream.Stream;
 
-import org.holdfast.cli.RunProgress;
-import org.holdfast.cli.Version;
+import org.holdfast.console.RunProgress;
+import org.holdfast.console.Version;
 import org.holdfast.fates.FateRun;
 import org.holdfast.output.RunWriter;
 import org.holdfast.run.RunObserver;
 import org.holdfast.run.Simulation;
-import org.holdfast.scenario.Overrides;
+import org.holdfast.schema.Overrides;
 import org.holdfast.scenario.Scenario;
-import org.holdfast.scenario.ScenarioException;
+import org.holdfast.schema.ScenarioException;
 import org.holdfast.scenario.ScenarioReader;
 import org.holdfast.uncertain.UncertainNumbers;
 

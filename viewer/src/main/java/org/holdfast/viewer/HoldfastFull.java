@@ -3,7 +3,7 @@ package org.holdfast.viewer;
 import org.holdfast.cli.Holdfast;
 import org.holdfast.film.RenderCommand;
 import org.holdfast.window.FrameSources;
-import org.holdfast.window.ViewCommand;
+import org.holdfast.viewer.ViewCommand;
 
 import picocli.CommandLine;
 

@@ -6,8 +6,8 @@ import java.util.List;
 
 import org.holdfast.replay.LiveRun;
 import org.holdfast.replay.RunArchive;
-import org.holdfast.replay.RunFrameSource;
-import org.holdfast.scenario.ScenarioException;
+import org.holdfast.window.RunFrameSource;
+import org.holdfast.schema.ScenarioException;
 
 /**
  * Opens the frame source for what {@code holdfast view} was given: a finished run's folder

@@ -1,5 +1,7 @@
 package org.holdfast.window;
 
+import org.holdfast.render.Camera;
+
 /**
  * Everything a frame depends on besides the run itself: the camera, the clock, the layers shown
  * and which member is chosen. Immutable; the controls replace it as keys and the mouse act.

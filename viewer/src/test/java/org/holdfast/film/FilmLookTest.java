@@ -12,7 +12,7 @@ import org.holdfast.render.FrameRenderer;
 import org.holdfast.render.Overlay;
 import org.holdfast.render.RenderSettings;
 import org.holdfast.render.SceneFrame;
-import org.holdfast.scenario.ScenarioException;
+import org.holdfast.schema.ScenarioException;
 import org.junit.jupiter.api.Test;
 
 /** The production keys of [film]: defaults, camera without a table, glows, dome text, layers. */

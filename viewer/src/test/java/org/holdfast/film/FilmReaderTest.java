@@ -11,10 +11,10 @@ import java.nio.file.Path;
 import org.holdfast.render.CameraPose;
 import org.holdfast.render.Overlay;
 import org.holdfast.render.projection.DomeProjection;
-import org.holdfast.scenario.Node;
-import org.holdfast.scenario.NumberReader;
-import org.holdfast.scenario.Overrides;
-import org.holdfast.scenario.ScenarioException;
+import org.holdfast.schema.Node;
+import org.holdfast.schema.NumberReader;
+import org.holdfast.schema.Overrides;
+import org.holdfast.schema.ScenarioException;
 import org.junit.jupiter.api.Test;
 
 class FilmReaderTest {
@@ -22,7 +22,7 @@ class FilmReaderTest {
     static final Path FILE = Path.of("quillon-group.toml");
 
     static FilmSpec read(String toml) {
-        Node root = org.holdfast.scenario.ScenarioFile.parse(FILE, toml, Overrides.none(), NumberReader.PLAIN);
+        Node root = org.holdfast.schema.ScenarioFile.parse(FILE, toml, Overrides.none(), NumberReader.PLAIN);
         return FilmReader.read(root);
     }
 

@@ -11,7 +11,8 @@ import java.util.ArrayList;
 import java.util.List;
 
 import org.holdfast.output.RunFolder;
-import org.holdfast.scenario.ScenarioException;
+import org.holdfast.schema.ScenarioException;
+import org.holdfast.window.RunFrameSource;
 import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.Timeout;

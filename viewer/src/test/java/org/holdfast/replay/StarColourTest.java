@@ -14,7 +14,7 @@ import java.util.Map;
 import org.holdfast.render.FateEvent;
 import org.holdfast.run.RunEvent;
 import org.holdfast.render.SceneFrame;
-import org.holdfast.scenario.ScenarioException;
+import org.holdfast.schema.ScenarioException;
 import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 

@@ -15,6 +15,7 @@ import org.holdfast.output.RunFolder;
 import org.holdfast.replay.DemoRun;
 import org.holdfast.viewer.HoldfastFull;
 import org.holdfast.window.gl.GlWindow;
+import org.holdfast.viewer.ViewCommand;
 import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;

@@ -6,6 +6,10 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import org.junit.jupiter.api.Test;
 
+import org.holdfast.render.ProjectionKind;
+import org.holdfast.render.Camera;
+import org.holdfast.render.CameraSpec;
+
 /** The text forms of --camera and --size. */
 class OptionFormsTest {
 
@@ -15,9 +19,9 @@ class OptionFormsTest {
         assertEquals(new CameraSpec(30, 15, 800, Camera.DEFAULT_FOV_DEG), c);
         assertEquals(40, CameraSpec.parse(" -30 , -15.5 , 2e3 , 40 ").fovDeg(), 0);
         assertEquals(-15.5, CameraSpec.parse(" -30 , -15.5 , 2e3 , 40 ").pitchDeg(), 0);
-        Camera cam = c.camera(Projection.DOME);
+        Camera cam = c.camera(ProjectionKind.DOME);
         assertEquals(800, cam.distanceKpc(), 0);
-        assertEquals(Projection.DOME, cam.projection());
+        assertEquals(ProjectionKind.DOME, cam.projection());
     }
 
     @Test

@@ -2,6 +2,9 @@ package org.holdfast.window;
 
 import java.util.List;
 
+import org.holdfast.render.ProjectionKind;
+import org.holdfast.render.Camera;
+
 /**
  * A frame source for tests: a deterministic, lopsided colour pattern that changes with every
  * part of the view (camera, clock, projection, layers), so a frame shown for the wrong view, upside
@@ -26,7 +29,7 @@ public class PatternSource implements FrameSource {
         int shiftR = (int) Math.floor(c.yawDeg());
         int shiftG = (int) Math.floor(3 * c.pitchDeg());
         int shiftB = (int) Math.floor(37 * view.clock().tGyr() + c.distanceKpc() + c.targetXKpc())
-                + (c.projection() == Projection.DOME ? 128 : 0) + view.layers().bits();
+                + (c.projection() == ProjectionKind.DOME ? 128 : 0) + view.layers().bits();
         for (int y = 0; y < height; y++) {
             int g = (y * 256 / height + shiftG) & 0xFF;
             for (int x = 0; x < width; x++) {

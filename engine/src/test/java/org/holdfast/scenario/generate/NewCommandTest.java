@@ -17,9 +17,9 @@ import org.holdfast.cli.Holdfast;
 import org.holdfast.group.GalaxySpec;
 import org.holdfast.group.GroupSpec;
 import org.holdfast.scenario.GroupReader;
-import org.holdfast.scenario.Node;
-import org.holdfast.scenario.Overrides;
-import org.holdfast.scenario.ScenarioFile;
+import org.holdfast.schema.Node;
+import org.holdfast.schema.Overrides;
+import org.holdfast.schema.ScenarioFile;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -135,7 +135,7 @@ class NewCommandTest {
         CommandRunner.Result r = CommandRunner.run("new", "--giants", "1", "--dwarfs", "1", "--seed", "3");
         assertEquals(0, r.exitCode(), r.err());
         Node root = ScenarioFile.parse(Path.of("stdout.toml"), r.out(), Overrides.none(),
-                org.holdfast.scenario.NumberReader.PLAIN);
+                org.holdfast.schema.NumberReader.PLAIN);
         assertEquals(2, GroupReader.read(root).galaxies().size());
     }
 

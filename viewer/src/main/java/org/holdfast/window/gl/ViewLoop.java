@@ -10,7 +10,7 @@ import org.holdfast.window.FrameSize;
 import org.holdfast.window.FrameSource;
 import org.holdfast.window.Screenshots;
 import org.holdfast.window.ViewState;
-import org.holdfast.window.input.Controls;
+import org.holdfast.window.Controls;
 import org.holdfast.window.input.Request;
 
 /**

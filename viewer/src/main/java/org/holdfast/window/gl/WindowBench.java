@@ -3,7 +3,7 @@ package org.holdfast.window.gl;
 import java.util.Map;
 
 import org.holdfast.bench.BenchSuite;
-import org.holdfast.window.Camera;
+import org.holdfast.render.Camera;
 import org.holdfast.window.Clock;
 import org.holdfast.window.FrameSize;
 import org.holdfast.window.FrameSource;
@@ -60,8 +60,8 @@ public final class WindowBench implements BenchSuite {
         }
         try {
             org.holdfast.replay.ReplayBench.write(root, 100_000);
-            try (org.holdfast.replay.RunFrameSource source =
-                    new org.holdfast.replay.RunFrameSource(org.holdfast.replay.RunArchive.open(root), null)) {
+            try (org.holdfast.window.RunFrameSource source =
+                    new org.holdfast.window.RunFrameSource(org.holdfast.replay.RunArchive.open(root), null)) {
                 return measure(source, SIZE, quick ? 5 : 20, quick ? 30 : 150);
             }
         } finally {
@@ -85,7 +85,7 @@ public final class WindowBench implements BenchSuite {
             double t0 = source.startGyr();
             double dt = (source.endGyr() - t0) / (warmup + frames);
             Camera camera = new Camera(0, 0, 0, source.overviewDistanceKpc(), 30, 20, Camera.DEFAULT_FOV_DEG,
-                    org.holdfast.window.Projection.FLAT);
+                    org.holdfast.render.ProjectionKind.FLAT);
             long drawNs = 0;
             long showNs = 0;
             long start = 0;

@@ -6,6 +6,8 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
 
+import org.holdfast.window.Controls;
+
 /**
  * The key table of {@code holdfast view}: which key (with or without Shift) does which
  * {@link Action}. Key codes are GLFW's, which are plain constants, so this class works without a

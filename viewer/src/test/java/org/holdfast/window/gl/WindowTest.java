@@ -11,14 +11,14 @@ import java.io.StringWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
 
-import org.holdfast.window.Camera;
+import org.holdfast.render.Camera;
 import org.holdfast.window.Clock;
 import org.holdfast.window.FrameSize;
 import org.holdfast.window.PatternSource;
-import org.holdfast.window.Projection;
+import org.holdfast.render.ProjectionKind;
 import org.holdfast.window.ViewRun;
 import org.holdfast.window.ViewState;
-import org.holdfast.window.input.Controls;
+import org.holdfast.window.Controls;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
@@ -60,7 +60,7 @@ class WindowTest {
         assertEquals(0, r.exitCode(), r.err());
         assertEquals(3, source.drawCount());
         ViewState shown = source.lastView();
-        assertEquals(new Camera(0, 0, 0, 500, 30, 10, Camera.DEFAULT_FOV_DEG, Projection.FLAT), shown.camera());
+        assertEquals(new Camera(0, 0, 0, 500, 30, 10, Camera.DEFAULT_FOV_DEG, ProjectionKind.FLAT), shown.camera());
         assertEquals(2.5, shown.clock().tGyr(), 0);
         assertFalse(shown.clock().playing());
         int[] expected = PatternSource.frame(shown, 320, 200);
@@ -81,7 +81,7 @@ class WindowTest {
         ViewRun.Result r = ViewRun.run((input, sets, keep) -> source, "view", dir.toString(), "--frames", "5", "--dome",
                 "--fps-report", "--screenshot", shot.toString(), "--size", "256x256");
         assertEquals(0, r.exitCode(), r.err());
-        assertEquals(Projection.DOME, source.lastView().camera().projection());
+        assertEquals(ProjectionKind.DOME, source.lastView().camera().projection());
         assertEquals(TOLERANCE, FrameCompare.maxChannelDifference(shot,
                 PatternSource.frame(source.lastView(), 256, 256), 256, 256));
         assertTrue(r.out().matches("(?s).*frames 5 in [0-9.]+ s: [0-9.]+ frames/s at 256x256.*"), r.out());
