@@ -184,7 +184,7 @@ public final class DynamicsBench implements BenchSuite {
      * records the peak heap of the run under heapKey.
      */
     static double tracerUpdatesPerSecond(int threads, int steps, Map<String, Object> results, String heapKey) {
-        ExpansionHistory h = new BenchHistory();
+        ExpansionHistory h = new IntegratorBench.ConstantDarkEnergy();
         RunSettings s = new RunSettings(0, steps * 1e-3, Scheme.LEAPFROG, Double.NaN, 1, Double.NaN,
                 true, false, 5);
         if (heapKey != null) {
@@ -204,61 +204,6 @@ public final class DynamicsBench implements BenchSuite {
                         peak / 1048576.0, Runtime.getRuntime().maxMemory() / 1048576));
             }
             return (double) sim.tracerCount() * r.steps() / r.wallSeconds();
-        }
-    }
-
-    /** A constant dark-energy term (k = Omega_L H0^2 for H0 = 70, Omega_L = 0.7), enough for timing. */
-    private static final class BenchHistory implements ExpansionHistory {
-        private final double h0 = Units.hubbleToPerGyr(70);
-
-        @Override
-        public double scaleFactor(double t) {
-            return Math.exp(Math.sqrt(0.7) * h0 * t);
-        }
-
-        @Override
-        public double hubbleRate(double t) {
-            return Math.sqrt(0.7) * h0;
-        }
-
-        @Override
-        public double totalAcceleration(double t) {
-            return 0.7 * h0 * h0;
-        }
-
-        @Override
-        public double darkEnergyAcceleration(double t) {
-            return 0.7 * h0 * h0;
-        }
-
-        @Override
-        public double darkEnergyAccelerationRate(double t) {
-            return 0;
-        }
-
-        @Override
-        public double matterAcceleration(double t) {
-            return 0;
-        }
-
-        @Override
-        public double darkEnergyDensity(double t) {
-            return 0.7 * criticalDensityToday();
-        }
-
-        @Override
-        public double criticalDensityToday() {
-            return 3 * h0 * h0 / (8 * Math.PI * Units.G);
-        }
-
-        @Override
-        public double earliestGyr() {
-            return -10;
-        }
-
-        @Override
-        public double latestGyr() {
-            return 100;
         }
     }
 }
