@@ -16,7 +16,9 @@ import org.holdfast.units.Units;
 /**
  * Keeps, at regular intervals, what the run's pictures show: each member's distance from the
  * group centre (the centre of mass of the main bound group, which stays with the group when
- * members escape), the zero-gravity radius of the main group's mass, the energy-budget
+ * members escape; once no two members are bound to each other, the centre of mass of all of
+ * them, since a lone galaxy is no group to measure from), the zero-gravity radius of the main
+ * group's mass (none once it has come apart), the energy-budget
  * residual; and the local Hubble diagram (distance and radial velocity of members and flow
  * tracers around the group centre) at the start and at the end.
  */
@@ -87,7 +89,7 @@ public final class RunRecorder implements RunObserver {
         residual[count] = run.energyResidual();
         double k = darkEnergy ? history.darkEnergyAcceleration(run.tGyr()) : 0;
         double mainMass = centre(run, k);
-        zeroGravity[count] = k > 0 ? Math.cbrt(Units.G * mainMass / k) : Double.NaN;
+        zeroGravity[count] = k > 0 && !Double.isNaN(mainMass) ? Math.cbrt(Units.G * mainMass / k) : Double.NaN;
         for (String n : names) {
             distance.computeIfAbsent(n, key -> filledNaN(times.length))[count] = Double.NaN;
         }
@@ -100,15 +102,24 @@ public final class RunRecorder implements RunObserver {
         count++;
     }
 
-    /** Sets {@link #centre} to the main group's centre of mass and velocity; returns its mass. */
+    /**
+     * Sets {@link #centre} to the main group's centre of mass and velocity; returns its mass, or
+     * NaN when the group has come apart (no two members bound: then the centre is that of all
+     * members).
+     */
     private double centre(RunView run, double k) {
         int n = run.bodyCount();
         double[] m = run.bodyMass();
         Subgroups s = Subgroups.find(n, m, new double[][] {run.bodyX(), run.bodyY(), run.bodyZ()},
                 new double[][] {run.bodyVx(), run.bodyVy(), run.bodyVz()}, k);
+        int[] main = s.mainGroup(m);
+        boolean apart = main.length < 2 && n > 1;
+        if (apart) {
+            main = java.util.stream.IntStream.range(0, n).toArray();
+        }
         double mm = 0;
         java.util.Arrays.fill(centre, 0);
-        for (int i : s.mainGroup(m)) {
+        for (int i : main) {
             mm += m[i];
             centre[0] += m[i] * run.bodyX()[i];
             centre[1] += m[i] * run.bodyY()[i];
@@ -120,7 +131,7 @@ public final class RunRecorder implements RunObserver {
         for (int c = 0; c < 6; c++) {
             centre[c] /= mm;
         }
-        return mm;
+        return apart ? Double.NaN : mm;
     }
 
     private static double[] filledNaN(int n) {
