@@ -89,7 +89,7 @@ public final class RipLadder {
 
     /**
      * The ladder for a universe that ends in a rip: the group (mass and radius given, or none
-     * when {@code groupMassMsun} is NaN), a Milky-Way-like galaxy, a planetary system like the
+     * when {@code groupMassMsun} is NaN), a large spiral galaxy like our own, a planetary system like the
      * Sun's, an Earth-like planet and a hydrogen atom; empty without a rip.
      */
     public static List<Rung> of(ExpansionTable table, String groupName, double groupMassMsun, double groupRadiusKpc) {
@@ -103,7 +103,8 @@ public final class RipLadder {
         }
         double galaxyMass = GALAXY_SPEED_KMS * GALAXY_SPEED_KMS * GALAXY_RADIUS_KPC / (Units.G * Units.KPC_PER_GYR_TO_KMS
                 * Units.KPC_PER_GYR_TO_KMS);
-        out.add(l.orbit("a galaxy like the Milky Way (a star 8.1 kpc out)", "galaxy", galaxyMass, GALAXY_RADIUS_KPC));
+        out.add(l.orbit("a large spiral galaxy like ours (a star 8.1 kpc out)", "galaxy", galaxyMass,
+                GALAXY_RADIUS_KPC));
         out.add(l.orbit("a solar system (the Earth's orbit)", "solar_system", 1.0, Units.AU_M / Units.KPC_M));
         out.add(l.surface("an Earth-like planet (by its gravity alone)", "planet", GM_EARTH_SI / Units.GM_SUN_SI,
                 R_EARTH_M / Units.KPC_M));
