@@ -114,4 +114,41 @@ class TimingSolverTest {
         // the mean matter pulls the pair together, so the full background needs less mass than Lambda alone
         assertTrue(full < de);
     }
+
+    /**
+     * Planck Collaboration 2020 (A&amp;A 641, A6), Table 2, TT,TE,EE+lowE+lensing+BAO: H0 = 67.66,
+     * Omega_m = 0.3111 (from memory: the table was not read here).
+     */
+    static ExpansionTable planck2018() {
+        return new Cosmology(67.66, 0.3111, 0, 0, new ConstantW(-1)).solve(1);
+    }
+
+    @Test
+    void benistyDavisEvans2023LambdaTimescale() {
+        // Benisty, Davis & Evans 2023 (ApJL 953, L2), abstract: T_Lambda = 2 pi / (c sqrt(Lambda)) ~ 63.2 Gyr
+        // for Planck's Lambda. With K = Lambda c^2 / 3 today (the dark-energy coefficient of a
+        // cosmological constant), T_Lambda = 2 pi / sqrt(3 K); Planck 2018 as above.
+        double k = Background.DARK_ENERGY.coefficient(planck2018(), 0);
+        assertEquals(63.2, 2 * Math.PI / Math.sqrt(3 * k), 0.05);
+    }
+
+    @Test
+    void benisty2024TenPerCentEachWayWithTheGaiaTangentialVelocity() {
+        // Benisty 2024 (A&A 689, L1), abstract: Lambda alone ~10% above the Kepler mass, the full LCDM
+        // background ~10% lower. The baseline of the second is read as Lambda alone: the paper's first
+        // arXiv version (2401.09546v1, abstract) gives 4.20e12 (full background) against 4.65e12
+        // (Lambda alone), 9.7% lower. Inputs: r = 770 kpc and v_r = -109.3 km/s (van der Marel et al.
+        // 2012, ApJ 753, 8), v_t = 82 km/s (Benisty et al. 2022, ApJL 928, L5, abstract: 82 +38 -35 km/s;
+        // that Benisty 2024 used it is from memory), Planck 2018 as above, its own age.
+        ExpansionTable h = planck2018();
+        PairMotion p = new PairMotion(770, -109.3, 82, -h.earliestGyr());
+        double none = TimingSolver.solve(p, Background.NONE, h).massMsun();
+        double de = TimingSolver.solve(p, Background.DARK_ENERGY, h).massMsun();
+        double full = TimingSolver.solve(p, Background.FULL, h).massMsun();
+        assertEquals(10, 100 * (de / none - 1), 1.0, "Lambda alone against Kepler");
+        assertEquals(-10, 100 * (full / de - 1), 1.0, "full background against Lambda alone");
+        // against the Kepler mass the full background is within 1%: the mean matter's pull and the
+        // dark-energy push nearly cancel for this pair (the -10% is not against Kepler here)
+        assertEquals(0, 100 * (full / none - 1), 1.0, "full background against Kepler");
+    }
 }
