@@ -151,4 +151,25 @@ class TimingSolverTest {
         // dark-energy push nearly cancel for this pair (the -10% is not against Kepler here)
         assertEquals(0, 100 * (full / none - 1), 1.0, "full background against Kepler");
     }
+
+    @Test
+    void inTheFullBackgroundLighterPairsAlsoComeFromNearlyZeroSeparation() {
+        // With the mean matter's pull -(4 pi G/3) rho_m r = -(2/9) r / t^2 early on (matter era,
+        // a ~ t^(2/3): common practice), r ~ a(t) x solves the equation for any comoving x, so every
+        // lighter pair also leaves the Big Bang from (nearly) zero separation, moving out more slowly
+        // than the Hubble flow; the timing mass is the heaviest pair that does not meet before the Big
+        // Bang, the one that starts with the Hubble flow (Peebles 1989, ApJ 344, L53: a^2 dx/dt -> 0 as
+        // t -> 0; from memory). Without a background a lighter pair is still far apart at the Big Bang.
+        ExpansionTable h = planck2018();
+        PairMotion p = new PairMotion(770, -109.3, 0, -h.earliestGyr());
+        for (Background b : new Background[] {Background.NONE, Background.FULL}) {
+            double m = TimingSolver.solve(p, b, h).massMsun();
+            double atBigBang = TimingSolver.orbit(p, 0.7 * m, t -> b.coefficient(h, t)).back(-p.ageGyr()).endKpc;
+            if (b == Background.FULL) {
+                assertTrue(atBigBang < 0.1 * p.separationKpc(), "full background: " + atBigBang + " kpc");
+            } else {
+                assertTrue(atBigBang > p.separationKpc(), "no background: " + atBigBang + " kpc");
+            }
+        }
+    }
 }
