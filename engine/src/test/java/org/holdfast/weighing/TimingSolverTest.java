@@ -172,4 +172,15 @@ class TimingSolverTest {
             }
         }
     }
+
+    @Test
+    void benistyDavisEvans2023KeplerPeriodOfThePair() {
+        // Benisty, Davis & Evans 2023 (ApJL 953, L2), abstract of the published version: the orbit of
+        // the pair has a period of ~17 Gyr (~20 Gyr in the arXiv version, 2306.14963v1). Inputs: r = 770 kpc, v_r = -109.3 km/s (van der Marel et
+        // al. 2012), v_t = 57 km/s (van der Marel et al. 2019, ApJ 872, 24: 57 +35 -31 km/s; from
+        // memory), the age of Planck 2018 as above; the Kepler (no background) timing orbit.
+        ExpansionTable h = planck2018();
+        PairMotion p = new PairMotion(770, -109.3, 57, -h.earliestGyr());
+        assertEquals(17, Math.round(TimingSolver.solve(p, Background.NONE, h).periodGyr()));
+    }
 }
