@@ -114,4 +114,73 @@ class TimingSolverTest {
         // the mean matter pulls the pair together, so the full background needs less mass than Lambda alone
         assertTrue(full < de);
     }
+
+    /**
+     * Planck Collaboration 2020 (A&amp;A 641, A6), Table 2, TT,TE,EE+lowE+lensing+BAO: H0 = 67.66,
+     * Omega_m = 0.3111 (from memory: the table was not read here).
+     */
+    static ExpansionTable planck2018() {
+        return new Cosmology(67.66, 0.3111, 0, 0, new ConstantW(-1)).solve(1);
+    }
+
+    @Test
+    void benistyDavisEvans2023LambdaTimescale() {
+        // Benisty, Davis & Evans 2023 (ApJL 953, L2), abstract: T_Lambda = 2 pi / (c sqrt(Lambda)) ~ 63.2 Gyr
+        // for Planck's Lambda. With K = Lambda c^2 / 3 today (the dark-energy coefficient of a
+        // cosmological constant), T_Lambda = 2 pi / sqrt(3 K); Planck 2018 as above.
+        double k = Background.DARK_ENERGY.coefficient(planck2018(), 0);
+        assertEquals(63.2, 2 * Math.PI / Math.sqrt(3 * k), 0.05);
+    }
+
+    @Test
+    void benisty2024TenPerCentEachWayWithTheGaiaTangentialVelocity() {
+        // Benisty 2024 (A&A 689, L1), abstract: Lambda alone ~10% above the Kepler mass, the full LCDM
+        // background ~10% lower. The baseline of the second is read as Lambda alone: the paper's first
+        // arXiv version (2401.09546v1, abstract) gives 4.20e12 (full background) against 4.65e12
+        // (Lambda alone), 9.7% lower. Inputs: r = 770 kpc and v_r = -109.3 km/s (van der Marel et al.
+        // 2012, ApJ 753, 8), v_t = 82 km/s (Benisty et al. 2022, ApJL 928, L5, abstract: 82 +38 -35 km/s;
+        // that Benisty 2024 used it is from memory), Planck 2018 as above, its own age.
+        ExpansionTable h = planck2018();
+        PairMotion p = new PairMotion(770, -109.3, 82, -h.earliestGyr());
+        double none = TimingSolver.solve(p, Background.NONE, h).massMsun();
+        double de = TimingSolver.solve(p, Background.DARK_ENERGY, h).massMsun();
+        double full = TimingSolver.solve(p, Background.FULL, h).massMsun();
+        assertEquals(10, 100 * (de / none - 1), 1.0, "Lambda alone against Kepler");
+        assertEquals(-10, 100 * (full / de - 1), 1.0, "full background against Lambda alone");
+        // against the Kepler mass the full background is within 1%: the mean matter's pull and the
+        // dark-energy push nearly cancel for this pair (the -10% is not against Kepler here)
+        assertEquals(0, 100 * (full / none - 1), 1.0, "full background against Kepler");
+    }
+
+    @Test
+    void inTheFullBackgroundLighterPairsAlsoComeFromNearlyZeroSeparation() {
+        // With the mean matter's pull -(4 pi G/3) rho_m r = -(2/9) r / t^2 early on (matter era,
+        // a ~ t^(2/3): common practice), r ~ a(t) x solves the equation for any comoving x, so every
+        // lighter pair also leaves the Big Bang from (nearly) zero separation, moving out more slowly
+        // than the Hubble flow; the timing mass is the heaviest pair that does not meet before the Big
+        // Bang, the one that starts with the Hubble flow (Peebles 1989, ApJ 344, L53: a^2 dx/dt -> 0 as
+        // t -> 0; from memory). Without a background a lighter pair is still far apart at the Big Bang.
+        ExpansionTable h = planck2018();
+        PairMotion p = new PairMotion(770, -109.3, 0, -h.earliestGyr());
+        for (Background b : new Background[] {Background.NONE, Background.FULL}) {
+            double m = TimingSolver.solve(p, b, h).massMsun();
+            double atBigBang = TimingSolver.orbit(p, 0.7 * m, t -> b.coefficient(h, t)).back(-p.ageGyr()).endKpc;
+            if (b == Background.FULL) {
+                assertTrue(atBigBang < 0.1 * p.separationKpc(), "full background: " + atBigBang + " kpc");
+            } else {
+                assertTrue(atBigBang > p.separationKpc(), "no background: " + atBigBang + " kpc");
+            }
+        }
+    }
+
+    @Test
+    void benistyDavisEvans2023KeplerPeriodOfThePair() {
+        // Benisty, Davis & Evans 2023 (ApJL 953, L2), abstract of the published version: the orbit of
+        // the pair has a period of ~17 Gyr (~20 Gyr in the arXiv version, 2306.14963v1). Inputs: r = 770 kpc, v_r = -109.3 km/s (van der Marel et
+        // al. 2012), v_t = 57 km/s (van der Marel et al. 2019, ApJ 872, 24: 57 +35 -31 km/s; from
+        // memory), the age of Planck 2018 as above; the Kepler (no background) timing orbit.
+        ExpansionTable h = planck2018();
+        PairMotion p = new PairMotion(770, -109.3, 57, -h.earliestGyr());
+        assertEquals(17, Math.round(TimingSolver.solve(p, Background.NONE, h).periodGyr()));
+    }
 }
