@@ -55,6 +55,8 @@ final class GroupSystem implements TrialSystem, SecondOrderSystem {
     private double mergerEnergy;
     /** Energy budget change booked by tidal stripping (run.Stripping). */
     private double strippedEnergy;
+    /** Energy budget change booked by taking out the centre of mass's drift ({@link #recentre}). */
+    private double recentredEnergy;
     /** Whether kicks, drifts and force updates move the tracers too (off: they are stepped on their own). */
     boolean tracersAlong;
     private final CompensatedSum kinetic = new CompensatedSum();
@@ -333,6 +335,7 @@ final class GroupSystem implements TrialSystem, SecondOrderSystem {
         e.add(-frictionWork.value());
         e.add(mergerEnergy);
         e.add(strippedEnergy);
+        e.add(recentredEnergy);
         return e.value();
     }
 
@@ -349,6 +352,103 @@ final class GroupSystem implements TrialSystem, SecondOrderSystem {
     /** Books the energy change of moving stripped mass to its host: the budget before minus after. */
     void addStrippedEnergy(double removed) {
         strippedEnergy += removed;
+    }
+
+    /**
+     * Takes out the drift of the bodies' centre of mass (mass-weighted position and velocity)
+     * once it exceeds the given fraction of the group's extent (the farthest member from the
+     * centre of mass) or of its rms speed: bodies and tracers are shifted by the same offset and
+     * velocity, and the change of the budget is booked, before minus after.
+     *
+     * <p>The background term c(t) r acts on the centre of mass too: an offset d of it obeys
+     * d'' = c(t) d, which grows as exp(&int; sqrt(c) dt) where c &gt; 0 (the linear instability of
+     * d'' = c d is common practice), so the rounding left in it (about 1e-16 of the group's size
+     * per step) would in time swamp the members' own motion. Tidal stripping also moves it a
+     * little by design; this takes that out too. Pair gravity depends only on differences of
+     * positions, so the shift changes the budget by its kinetic energy and the background
+     * potential -(1/2) c sum m r^2 alone: with S = sum m r and P = sum m v,
+     * sum m |r - d|^2 - sum m r^2 = M d^2 - 2 d . S and the same for the velocities.
+     * Nothing is allocated.
+     *
+     * @return whether the bodies were moved (the stepper must then restart)
+     */
+    boolean recentre(double fraction) {
+        Bodies b = bodies;
+        int n = b.count();
+        double m = 0;
+        double sx = 0;
+        double sy = 0;
+        double sz = 0;
+        double px = 0;
+        double py = 0;
+        double pz = 0;
+        for (int i = 0; i < n; i++) {
+            double mi = b.mass[i];
+            m += mi;
+            sx += mi * b.x[i];
+            sy += mi * b.y[i];
+            sz += mi * b.z[i];
+            px += mi * b.vx[i];
+            py += mi * b.vy[i];
+            pz += mi * b.vz[i];
+        }
+        if (!(m > 0)) {
+            return false;
+        }
+        double dx = sx / m;
+        double dy = sy / m;
+        double dz = sz / m;
+        double ux = px / m;
+        double uy = py / m;
+        double uz = pz / m;
+        double extent2 = 0;
+        double speed2 = 0;
+        for (int i = 0; i < n; i++) {
+            double ex = b.x[i] - dx;
+            double ey = b.y[i] - dy;
+            double ez = b.z[i] - dz;
+            extent2 = Math.max(extent2, ex * ex + ey * ey + ez * ez);
+            double wx = b.vx[i] - ux;
+            double wy = b.vy[i] - uy;
+            double wz = b.vz[i] - uz;
+            speed2 += b.mass[i] * (wx * wx + wy * wy + wz * wz);
+        }
+        speed2 /= m;
+        double d2 = dx * dx + dy * dy + dz * dz;
+        double u2 = ux * ux + uy * uy + uz * uz;
+        double f2 = fraction * fraction;
+        if (!(d2 > f2 * extent2) && !(u2 > f2 * speed2)) {
+            return false;
+        }
+        double kineticChange = 0.5 * (m * u2 - 2 * (ux * px + uy * py + uz * pz));
+        double potentialChange = 0;
+        if (tide.active()) {
+            potentialChange = -0.5 * tide.coefficient(t) * (m * d2 - 2 * (dx * sx + dy * sy + dz * sz));
+        }
+        recentredEnergy -= kineticChange + potentialChange;
+        for (int i = 0; i < n; i++) {
+            b.x[i] -= dx;
+            b.y[i] -= dy;
+            b.z[i] -= dz;
+            b.vx[i] -= ux;
+            b.vy[i] -= uy;
+            b.vz[i] -= uz;
+        }
+        Tracers s = tracers;
+        for (int i = 0; i < s.count; i++) {
+            s.x[i] -= dx;
+            s.y[i] -= dy;
+            s.z[i] -= dz;
+            s.vx[i] -= ux;
+            s.vy[i] -= uy;
+            s.vz[i] -= uz;
+        }
+        return true;
+    }
+
+    /** Budget change booked by {@link #recentre} so far, Msun kpc^2/Gyr^2. */
+    double recentredEnergy() {
+        return recentredEnergy;
     }
 
     /** Books the orbital energy a merger removed: the budget before minus after. */

@@ -176,6 +176,12 @@ public final class Simulation implements RunView, AutoCloseable {
             if (stripping != null && stripping.apply(system, mergers)) {
                 afterMerger();
             }
+            // the centre of mass's drift taken out (GroupSystem.recentre): the background term
+            // amplifies it e-fold every 1/sqrt(c), so left alone it would swamp a long run
+            if (system.recentre(RECENTRE_FRACTION)) {
+                afterMerger();
+                recentrings++;
+            }
             if (system.bodies.count() <= 64) {
                 updateEnergy();
             }
@@ -258,6 +264,17 @@ public final class Simulation implements RunView, AutoCloseable {
     static final double TRACER_ETA = 0.2;
 
     private double maxResidual;
+
+    /**
+     * The centre of mass is put back at the origin once its offset exceeds this fraction of the
+     * group's extent (or its velocity this fraction of the rms speed): rounding starts it at
+     * about 1e-16, so this comes rarely (about every 9 e-folds of its growth), and an offset this
+     * small costs the members' relative positions nothing in double precision.
+     */
+    static final double RECENTRE_FRACTION = 1e-12;
+
+    /** How many times the centre of mass has been put back at the origin. */
+    private long recentrings;
 
     /** Whether the expansion history ends before run.until_gyr, so the run must stop short. */
     private boolean endsEarly() {
@@ -373,6 +390,11 @@ public final class Simulation implements RunView, AutoCloseable {
     /** Force evaluations of the bodies so far (IAS15's iterations included; trial steps of the step chooser not). */
     public long forceEvaluations() {
         return stepper.evaluations();
+    }
+
+    /** How many times the centre of mass's drift has been taken out so far. */
+    public long recentrings() {
+        return recentrings;
     }
 
     /** The scheme in use. */

@@ -68,7 +68,7 @@ public final class ScenarioReader {
                     "%.4g Gyr is outside this universe's history (%.4g to %.4g Gyr from today)",
                     run.startGyr(), expansion.earliestGyr(), expansion.latestGyr()));
         }
-        ReachCheck.check(runNode, run, group, expansion, untilGyr);
+        ReachCheck.check(runNode, run, expansion, untilGyr);
         warnings.addAll(numbers.warnings());
         return new Scenario(name, description, file, cosmology, expansion, run, group, List.copyOf(warnings),
                 List.copyOf(numbers.used()));
