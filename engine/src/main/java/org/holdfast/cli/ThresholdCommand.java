@@ -19,7 +19,7 @@ import org.holdfast.schema.ScenarioException;
 import org.holdfast.sweep.Axis;
 import org.holdfast.sweep.KeyCheck;
 import org.holdfast.sweep.LocalEngine;
-import org.holdfast.sweep.MemberFate;
+import org.holdfast.sweep.MemberOutcome;
 import org.holdfast.sweep.RunFunctions;
 import org.holdfast.sweep.RunOutcome;
 import org.holdfast.sweep.RunRecord;
@@ -131,9 +131,9 @@ public final class ThresholdCommand implements Callable<Integer> {
         for (String k : Overrides.parse(set).asMap().keySet()) {
             check.requireKnown(Overrides.OPTION, k);
         }
-        List<String> allowed = new ArrayList<>(member == null ? RunOutcome.VERDICTS : MemberFate.FATES);
+        List<String> allowed = new ArrayList<>(member == null ? RunOutcome.VERDICTS : MemberOutcome.FATES);
         if (member != null) {
-            allowed.add(MemberFate.TOGETHER);
+            allowed.add(MemberOutcome.TOGETHER);
         }
         if (!allowed.contains(fate)) {
             throw new ScenarioException("--fate", fate, "choose one of " + String.join(", ", allowed)
@@ -254,12 +254,12 @@ public final class ThresholdCommand implements Callable<Integer> {
             }
             return fate.equals("bound") || o.boundUntilGyr() == null || o.boundUntilGyr() <= t;
         }
-        MemberFate f = o.member(member);
-        if (f != null && fate.equals(MemberFate.TOGETHER)) {
+        MemberOutcome f = o.member(member);
+        if (f != null && fate.equals(MemberOutcome.TOGETHER)) {
             return Outcomes.together(o, member);
         }
         if (f == null) {
-            List<String> names = o.members().stream().map(MemberFate::name).toList();
+            List<String> names = o.members().stream().map(MemberOutcome::name).toList();
             throw new ScenarioException("--member", member, "no such member; the scenario has " + String.join(", ", names));
         }
         return f.fate().equals(fate) && (f.atGyr() == null || f.atGyr() <= t);

@@ -64,9 +64,9 @@ public final class EngineRunFunction implements RunFunction {
                 sim.close();
             }
         }
-        List<MemberFate> fates = new ArrayList<>();
+        List<MemberOutcome> fates = new ArrayList<>();
         for (org.holdfast.fates.MemberFate f : r.members()) {
-            fates.add(new MemberFate(f.name(), f.fate().key(), finite(f.atGyr()), f.with(), finite(f.leftGyr()), null,
+            fates.add(new MemberOutcome(f.name(), f.fate().key(), finite(f.atGyr()), f.with(), finite(f.leftGyr()), null,
                     null, null));
         }
         GroupAnalysis.Result group = GroupAnalysis.analyse(fates, start, end);

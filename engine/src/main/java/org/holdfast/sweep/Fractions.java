@@ -42,7 +42,7 @@ public final class Fractions {
     /** The rows, point by point; {@code records} must be sorted by run index and complete. */
     public static List<Row> rows(SweepPlan plan, List<RunRecord> records) {
         List<String> members = ResultsTable.memberNames(records);
-        Set<String> fates = new LinkedHashSet<>(MemberFate.FATES);
+        Set<String> fates = new LinkedHashSet<>(MemberOutcome.FATES);
         Set<String> verdicts = new LinkedHashSet<>(RunOutcome.VERDICTS);
         for (RunRecord r : records) {
             verdicts.add(r.outcome().verdict());
@@ -61,15 +61,15 @@ public final class Fractions {
             for (String m : members) {
                 for (String fate : fates) {
                     rows.add(row(point, values, "member", m, fate, count(at, o -> {
-                        MemberFate f = o.member(m);
+                        MemberOutcome f = o.member(m);
                         return f != null && f.fate().equals(fate);
                     }), at.size()));
                 }
-                rows.add(row(point, values, "member", m, MemberFate.TOGETHER,
+                rows.add(row(point, values, "member", m, MemberOutcome.TOGETHER,
                         count(at, o -> Outcomes.together(o, m)), at.size()));
             }
             for (List<String> p : plan.pairs()) {
-                rows.add(row(point, values, "pair", Outcomes.pairName(p), MemberFate.TOGETHER,
+                rows.add(row(point, values, "pair", Outcomes.pairName(p), MemberOutcome.TOGETHER,
                         count(at, o -> Outcomes.pairTogether(o, p.get(0), p.get(1))), at.size()));
             }
             for (String v : verdicts) {

@@ -65,7 +65,7 @@ public final class GroupAnalysis {
     }
 
     /** The answer: the members with their extra fields filled in, and the verdict. */
-    public record Result(List<MemberFate> members, String verdict) {
+    public record Result(List<MemberOutcome> members, String verdict) {
     }
 
     /**
@@ -74,7 +74,7 @@ public final class GroupAnalysis {
      * @param start the bodies at the start (every member)
      * @param end the bodies at the end (the survivors of mergers)
      */
-    public static Result analyse(List<MemberFate> fates, State start, State end) {
+    public static Result analyse(List<MemberOutcome> fates, State start, State end) {
         Map<String, Boolean> atStart = boundAtStart(start);
         Map<String, Integer> endIndex = new HashMap<>();
         for (int i = 0; i < end.names().length; i++) {
@@ -84,19 +84,19 @@ public final class GroupAnalysis {
         RunOutcome probe = new RunOutcome("", null, fates, 0, 0, null);
         // the end subgroup each member is counted in; -1 when its galaxy is not found
         Map<String, Integer> raw = new LinkedHashMap<>();
-        for (MemberFate f : fates) {
-            MemberFate s = Outcomes.survivor(probe, f);
+        for (MemberOutcome f : fates) {
+            MemberOutcome s = Outcomes.survivor(probe, f);
             Integer i = s == null ? null : endIndex.get(s.name());
             raw.put(f.name(), i == null ? -1 : endGroup[i]);
         }
         int holding = holdingGroup(raw, atStart, end, endGroup);
         Map<Integer, Integer> number = new HashMap<>();
-        List<MemberFate> out = new ArrayList<>();
-        for (MemberFate f : fates) {
+        List<MemberOutcome> out = new ArrayList<>();
+        for (MemberOutcome f : fates) {
             int g = raw.get(f.name());
             Integer label = g < 0 ? null : number.computeIfAbsent(g, k -> number.size() + 1);
             boolean together = g >= 0 && g == holding;
-            out.add(new MemberFate(f.name(), f.fate(), f.atGyr(), f.with(), f.leftGyr(), together, label,
+            out.add(new MemberOutcome(f.name(), f.fate(), f.atGyr(), f.with(), f.leftGyr(), together, label,
                     atStart.getOrDefault(f.name(), false)));
         }
         return new Result(out, verdict(raw, atStart));

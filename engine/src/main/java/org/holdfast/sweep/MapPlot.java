@@ -67,7 +67,7 @@ final class MapPlot {
         if (o.contains("+")) {
             return r.level().equals("pair") && r.name().equals(o);
         }
-        return r.level().equals("member") && r.name().equals(o) && r.outcome().equals(MemberFate.TOGETHER);
+        return r.level().equals("member") && r.name().equals(o) && r.outcome().equals(MemberOutcome.TOGETHER);
     }
 
     static String title(SweepPlan plan) {

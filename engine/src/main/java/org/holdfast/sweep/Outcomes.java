@@ -7,8 +7,8 @@ import java.util.Set;
 /**
  * The outcomes a sweep counts beyond a member's fate, read off one run: whether a member ends
  * {@code together} with the group, and whether two named members stay bound to each other (or
- * merged). Both use what the run recorded ({@link MemberFate#together()},
- * {@link MemberFate#group()}); for a run that recorded only fates (an older journal, a test's
+ * merged). Both use what the run recorded ({@link MemberOutcome#together()},
+ * {@link MemberOutcome#group()}); for a run that recorded only fates (an older journal, a test's
  * stand-in physics) they fall back on the fates: bound counts as together, and merged counts
  * as the galaxy it merged into.
  */
@@ -19,14 +19,14 @@ public final class Outcomes {
 
     /** Whether the member is bound, or merged into a galaxy that stays bound; false if unknown. */
     public static boolean together(RunOutcome o, String name) {
-        MemberFate f = o.member(name);
+        MemberOutcome f = o.member(name);
         if (f == null) {
             return false;
         }
         if (f.together() != null) {
             return f.together();
         }
-        MemberFate end = survivor(o, f);
+        MemberOutcome end = survivor(o, f);
         return end != null && end.fate().equals("bound");
     }
 
@@ -35,16 +35,16 @@ public final class Outcomes {
      * symmetric in {@code a} and {@code b}.
      */
     public static boolean pairTogether(RunOutcome o, String a, String b) {
-        MemberFate fa = o.member(a);
-        MemberFate fb = o.member(b);
+        MemberOutcome fa = o.member(a);
+        MemberOutcome fb = o.member(b);
         if (fa == null || fb == null) {
             return false;
         }
         if (fa.group() != null && fb.group() != null) {
             return fa.group().equals(fb.group());
         }
-        MemberFate ea = survivor(o, fa);
-        MemberFate eb = survivor(o, fb);
+        MemberOutcome ea = survivor(o, fa);
+        MemberOutcome eb = survivor(o, fb);
         if (ea == null || eb == null) {
             return false;
         }
@@ -52,9 +52,9 @@ public final class Outcomes {
     }
 
     /** The galaxy a member ends in: itself, or the end of its chain of mergers; null for a broken chain. */
-    static MemberFate survivor(RunOutcome o, MemberFate f) {
+    static MemberOutcome survivor(RunOutcome o, MemberOutcome f) {
         Set<String> seen = new HashSet<>();
-        MemberFate at = f;
+        MemberOutcome at = f;
         while (at != null && at.fate().equals("merged") && at.with() != null) {
             if (!seen.add(at.name())) {
                 return null;

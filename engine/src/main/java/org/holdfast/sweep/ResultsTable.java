@@ -45,7 +45,7 @@ public final class ResultsTable {
     static List<String> memberNames(List<RunRecord> sorted) {
         Set<String> names = new LinkedHashSet<>();
         for (RunRecord r : sorted) {
-            for (MemberFate m : r.outcome().members()) {
+            for (MemberOutcome m : r.outcome().members()) {
                 names.add(m.name());
             }
         }
@@ -105,7 +105,7 @@ public final class ResultsTable {
                 row.add(o.verdict());
                 row.add(num(o.boundUntilGyr()));
                 for (String m : members) {
-                    MemberFate f = o.member(m);
+                    MemberOutcome f = o.member(m);
                     row.add(f == null ? "" : f.fate());
                     row.add(f == null ? "" : num(f.atGyr()));
                     row.add(f == null ? "" : num(f.leftGyr()));

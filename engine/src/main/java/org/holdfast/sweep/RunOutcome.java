@@ -18,7 +18,7 @@ import java.util.TreeMap;
  * @param sampledValues the values drawn for uncertain numbers, by dotted key (empty when not
  *     sampling)
  */
-public record RunOutcome(String verdict, Double boundUntilGyr, List<MemberFate> members,
+public record RunOutcome(String verdict, Double boundUntilGyr, List<MemberOutcome> members,
         double energyBudgetError, double wallS, Map<String, Double> sampledValues) implements Serializable {
 
     private static final long serialVersionUID = 1L;
@@ -37,8 +37,8 @@ public record RunOutcome(String verdict, Double boundUntilGyr, List<MemberFate> 
     }
 
     /** The fate of the named member, or null if the run does not know it. */
-    public MemberFate member(String name) {
-        for (MemberFate m : members) {
+    public MemberOutcome member(String name) {
+        for (MemberOutcome m : members) {
             if (m.name().equals(name)) {
                 return m;
             }

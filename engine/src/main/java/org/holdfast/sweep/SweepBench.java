@@ -39,8 +39,8 @@ public final class SweepBench implements BenchSuite {
             for (long i = 0; i < iterations; i++) {
                 x = x * 0.999999 + Math.sqrt(i + x);
             }
-            List<MemberFate> m = List.of(new MemberFate("Alpha", "bound", null, null),
-                    new MemberFate("Beta", x > 0 ? "ripped" : "bound", 12.5, null));
+            List<MemberOutcome> m = List.of(new MemberOutcome("Alpha", "bound", null, null),
+                    new MemberOutcome("Beta", x > 0 ? "ripped" : "bound", 12.5, null));
             return new RunOutcome("partly-bound", 12.5, m, 1e-8, 0, Map.of());
         }
     }

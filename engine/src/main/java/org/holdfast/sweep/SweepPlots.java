@@ -86,7 +86,7 @@ public final class SweepPlots {
         Curve group = new Curve("group stays bound (members bound at the start)", n);
         for (Fractions.Row r : rows) {
             Curve c = null;
-            if (r.level().equals("member") && r.outcome().equals(MemberFate.TOGETHER)) {
+            if (r.level().equals("member") && r.outcome().equals(MemberOutcome.TOGETHER)) {
                 c = byName.computeIfAbsent(r.name() + " together", k -> new Curve(k, n));
             } else if (r.level().equals("pair")) {
                 c = byName.computeIfAbsent(r.name().replace("+", " & ") + " together", k -> new Curve(k, n));
@@ -183,7 +183,7 @@ public final class SweepPlots {
         int samples = Math.max(1, plan.samples());
         for (RunRecord r : records) {
             double x0 = plan.valuesAt(r.point())[0];
-            for (MemberFate m : r.outcome().members()) {
+            for (MemberOutcome m : r.outcome().members()) {
                 List<double[]> list = points.get(m.fate());
                 if (list == null || m.atGyr() == null) {
                     continue;

@@ -25,8 +25,8 @@ class GroupAnalysisTest {
                 new double[][] {vx, new double[n], new double[n]}, 0.0);
     }
 
-    private static MemberFate fate(String name, String fate) {
-        return new MemberFate(name, fate, fate.equals("bound") ? null : 5.0, null);
+    private static MemberOutcome fate(String name, String fate) {
+        return new MemberOutcome(name, fate, fate.equals("bound") ? null : 5.0, null);
     }
 
     @Test
@@ -37,11 +37,11 @@ class GroupAnalysisTest {
             GroupAnalysis.State end = state(names, m, new double[] {0, 1e6}, new double[] {0, 1e4});
             // the old fates call the heavier one bound; the answer must not care
             String heavy = m[0] > m[1] ? "Arro" : "Belk";
-            List<MemberFate> fates = List.of(fate("Arro", heavy.equals("Arro") ? "bound" : "ripped"),
+            List<MemberOutcome> fates = List.of(fate("Arro", heavy.equals("Arro") ? "bound" : "ripped"),
                     fate("Belk", heavy.equals("Belk") ? "bound" : "ripped"));
             GroupAnalysis.Result r = GroupAnalysis.analyse(fates, start, end);
             assertEquals("dissolved", r.verdict());
-            for (MemberFate f : r.members()) {
+            for (MemberOutcome f : r.members()) {
                 assertFalse(f.together(), f.toString());
                 assertTrue(f.boundAtStart(), f.toString());
             }
@@ -61,8 +61,8 @@ class GroupAnalysisTest {
         String[] endNames = {"Arro", "Belk", "Dusk"};
         GroupAnalysis.State end = state(endNames, new double[] {1e12, 5.1e11, 1e10}, new double[] {0, 150, 3e6},
                 new double[] {0, 0, 1e4});
-        List<MemberFate> fates = List.of(fate("Arro", "bound"), fate("Belk", "bound"),
-                new MemberFate("Cwen", "merged", 3.0, "Belk"), fate("Dusk", "escaped"));
+        List<MemberOutcome> fates = List.of(fate("Arro", "bound"), fate("Belk", "bound"),
+                new MemberOutcome("Cwen", "merged", 3.0, "Belk"), fate("Dusk", "escaped"));
         GroupAnalysis.Result r = GroupAnalysis.analyse(fates, start, end);
         assertEquals("bound", r.verdict(), "the three bound at the start end together");
         RunOutcome o = new RunOutcome(r.verdict(), null, r.members(), 0, 0, null);
@@ -82,7 +82,7 @@ class GroupAnalysisTest {
         String[] names = {"Arro", "Belk", "Cwen"};
         double[] m = {1e12, 1e12, 1e12};
         GroupAnalysis.State apart = state(names, m, new double[] {0, 1e6, 2e6}, new double[] {0, 1e4, 2e4});
-        List<MemberFate> fates = List.of(fate("Arro", "bound"), fate("Belk", "escaped"), fate("Cwen", "escaped"));
+        List<MemberOutcome> fates = List.of(fate("Arro", "bound"), fate("Belk", "escaped"), fate("Cwen", "escaped"));
         assertEquals("unbound", GroupAnalysis.analyse(fates, apart, apart).verdict());
         GroupAnalysis.State close = state(names, m, new double[] {0, 100, 200}, new double[] {0, 0, 0});
         GroupAnalysis.State oneLeft = state(names, m, new double[] {0, 100, 2e6}, new double[] {0, 0, 2e4});
@@ -96,7 +96,7 @@ class GroupAnalysisTest {
     @Test
     void runsThatRecordedOnlyFatesFallBackOnThem() {
         RunOutcome o = new RunOutcome("partly-bound", null, List.of(fate("Arro", "bound"), fate("Belk", "ripped"),
-                new MemberFate("Cwen", "merged", 2.0, "Arro"), new MemberFate("Dusk", "merged", 2.0, "Belk")), 0, 0, null);
+                new MemberOutcome("Cwen", "merged", 2.0, "Arro"), new MemberOutcome("Dusk", "merged", 2.0, "Belk")), 0, 0, null);
         assertTrue(Outcomes.together(o, "Cwen"));
         assertFalse(Outcomes.together(o, "Dusk"), "merged into a galaxy that was ripped");
         assertTrue(Outcomes.pairTogether(o, "Dusk", "Belk"));

@@ -18,8 +18,8 @@ class JournalTest {
     Path dir;
 
     static RunRecord record(long run, double t) {
-        RunOutcome o = new RunOutcome("partly-bound", t, List.of(new MemberFate("Ilsor", "ripped", t, null),
-                new MemberFate("Bram", "merged", 0.1 + 0.2, "Ilsor")), 3.3e-9, 0.25, Map.of("x.y", Math.PI));
+        RunOutcome o = new RunOutcome("partly-bound", t, List.of(new MemberOutcome("Ilsor", "ripped", t, null),
+                new MemberOutcome("Bram", "merged", 0.1 + 0.2, "Ilsor")), 3.3e-9, 0.25, Map.of("x.y", Math.PI));
         return new RunRecord(run, (int) run / 2, (int) run % 2, -1234567890123L * run, o);
     }
 

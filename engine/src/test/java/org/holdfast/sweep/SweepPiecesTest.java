@@ -52,7 +52,7 @@ class SweepPiecesTest {
         String[] fates = {"ripped", "bound", "bound", "bound", "ripped", "ripped", "ripped", "merged"};
         for (int r = 0; r < 8; r++) {
             RunOutcome o = new RunOutcome(fates[r].equals("bound") ? "bound" : "dissolved", null,
-                    List.of(new MemberFate("Quell", fates[r], fates[r].equals("bound") ? null : 3.0, null)), 0, 0, null);
+                    List.of(new MemberOutcome("Quell", fates[r], fates[r].equals("bound") ? null : 3.0, null)), 0, 0, null);
             records.add(new RunRecord(r, r / 4, r % 4, r, o));
         }
         List<RunRecord> shuffled = new ArrayList<>(records);
@@ -80,7 +80,7 @@ class SweepPiecesTest {
         List<String> seen = Collections.synchronizedList(new ArrayList<>());
         RunFunction recorder = (s, o, seed, draw, sample, until, snaps) -> {
             seen.add(String.valueOf(snaps));
-            return new RunOutcome("bound", null, List.of(new MemberFate("Quell", "bound", null, null)), 0, 0, null);
+            return new RunOutcome("bound", null, List.of(new MemberOutcome("Quell", "bound", null, null)), 0, 0, null);
         };
         SweepPlan plan = new SweepPlan(SweepPlan.FORMAT, scenario.toString(), "00", Map.of(),
                 List.of(Axis.parse("k=1,2")), 1, false, 1, null, true, 1, 1);

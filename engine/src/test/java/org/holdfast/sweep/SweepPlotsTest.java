@@ -51,7 +51,7 @@ class SweepPlotsTest {
         for (int r = 0; r < 15; r++) {
             String fa = r % 3 == 0 ? "ripped" : "bound";
             records.add(new RunRecord(r, r / 5, r % 5, 1, new RunOutcome(fa.equals("bound") ? "bound" : "dissolved", null,
-                    List.of(new MemberFate("Arro", "bound", null, null), new MemberFate("Belk", fa, 2.0, null)), 0, 0,
+                    List.of(new MemberOutcome("Arro", "bound", null, null), new MemberOutcome("Belk", fa, 2.0, null)), 0, 0,
                     null)));
         }
         List<Fractions.Row> rows = Fractions.rows(plan, records);

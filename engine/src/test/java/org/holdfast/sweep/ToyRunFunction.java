@@ -86,17 +86,17 @@ public final class ToyRunFunction implements RunFunction {
             sampled.put("toy.w_noise", noise);
         }
         double w = w0 + noise;
-        List<MemberFate> fates = new ArrayList<>();
+        List<MemberOutcome> fates = new ArrayList<>();
         int ripped = 0;
         Double firstRip = null;
         for (GalaxySpec g : group.galaxies()) {
             double t = ripTimeGyr(w);
             if (w < criticalW(g.massMsun()) && t <= until) {
-                fates.add(new MemberFate(g.name(), "ripped", t, null));
+                fates.add(new MemberOutcome(g.name(), "ripped", t, null));
                 ripped++;
                 firstRip = firstRip == null ? t : Math.min(firstRip, t);
             } else {
-                fates.add(new MemberFate(g.name(), "bound", null, null));
+                fates.add(new MemberOutcome(g.name(), "bound", null, null));
             }
         }
         String verdict = ripped == 0 ? "bound" : ripped == fates.size() ? "dissolved" : "partly-bound";

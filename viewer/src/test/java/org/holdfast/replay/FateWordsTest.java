@@ -18,7 +18,7 @@ class FateWordsTest {
     @Test
     void theOverlayUsesTheKeyOfEachKindOfEvent() {
         for (String key : List.of("merged", "escaped", "ripped")) {
-            assertTrue(org.holdfast.sweep.MemberFate.FATES.contains(key), key + " is a fate key");
+            assertTrue(org.holdfast.sweep.MemberOutcome.FATES.contains(key), key + " is a fate key");
             FateEvent e = RunArchive.event(key, 3.5, List.of("Quillon", "Sarrow"));
             assertNotNull(e, key);
             String words = e.describe();

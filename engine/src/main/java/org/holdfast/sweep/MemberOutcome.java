@@ -9,7 +9,8 @@ import com.fasterxml.jackson.annotation.JsonInclude;
 import org.holdfast.fates.Fate;
 
 /**
- * One member's fate in one run.
+ * One member's outcome in one run as the sweep tables keep it: its {@link Fate} as the file word,
+ * with what the sweep adds (together, subgroup, bound at the start).
  *
  * @param name the member's name
  * @param fate one of {@link Fate}'s keys: bound, merged, escaped, ripped, unbound (not bound to the
@@ -28,7 +29,7 @@ import org.holdfast.fates.Fate;
  *     when the run does not say (then every member counts)
  */
 @JsonInclude(JsonInclude.Include.NON_NULL)
-public record MemberFate(String name, String fate, Double atGyr, String with, Double leftGyr, Boolean together,
+public record MemberOutcome(String name, String fate, Double atGyr, String with, Double leftGyr, Boolean together,
         Integer group, Boolean boundAtStart) implements Serializable {
 
     private static final long serialVersionUID = 2L;
@@ -40,7 +41,7 @@ public record MemberFate(String name, String fate, Double atGyr, String with, Do
     public static final String TOGETHER = "together";
 
     /** A fate with nothing but its kind, time and partner known. */
-    public MemberFate(String name, String fate, Double atGyr, String with) {
+    public MemberOutcome(String name, String fate, Double atGyr, String with) {
         this(name, fate, atGyr, with, null, null, null, null);
     }
 }
