@@ -53,17 +53,25 @@ final class FilmManifest {
             if (Files.isDirectory(dir)) {
                 // another worker of the same film may be writing its manifest or a frame right now:
                 // its temporary files (hidden, ending in .part) do not make the folder another film's
+                boolean others;
                 try (var s = Files.list(dir)) {
-                    if (s.anyMatch(p -> !p.getFileName().toString().startsWith("."))) {
-                        throw new ScenarioException("--out", null, dir + " is not empty and holds no " + FILE
-                                + "; choose another --out or remove that folder");
-                    }
+                    others = s.anyMatch(p -> !p.getFileName().toString().startsWith("."));
+                }
+                if (others && Files.isRegularFile(file)) {
+                    // a worker of the same film put its manifest in place since the first look: check it
+                    claim(dir, input, film, cameraOption);
+                    return;
+                }
+                if (others) {
+                    throw new ScenarioException("--out", null, dir + " is not empty and holds no " + FILE
+                            + "; choose another --out or remove that folder");
                 }
             }
             Files.createDirectories(dir);
             // a name of this worker's own: workers of one film starting together each write the
             // same manifest and rename it into place, the last rename winning with the same bytes
-            Path tmp = dir.resolve("." + FILE + "." + ProcessHandle.current().pid() + ".part");
+            Path tmp = dir.resolve("." + FILE + "." + ProcessHandle.current().pid() + "."
+                    + Thread.currentThread().getId() + ".part");
             JSON.writeValue(tmp.toFile(), m);
             Files.move(tmp, file, StandardCopyOption.REPLACE_EXISTING, StandardCopyOption.ATOMIC_MOVE);
             if (!JSON.readTree(file.toFile()).equals(JSON.valueToTree(m))) {
