@@ -42,6 +42,7 @@ final class FilmManifest {
         Map<String, Object> m = describe(input, film, cameraOption);
         Path file = dir.resolve(FILE);
         try {
+            removeDeadWorkersParts(dir);
             if (Files.isRegularFile(file)) {
                 JsonNode had = JSON.readTree(file.toFile());
                 if (!had.equals(JSON.valueToTree(m))) {
@@ -83,6 +84,32 @@ final class FilmManifest {
         }
     }
 
+
+    /** A temporary file of a worker: hidden, ".NAME.PID.THREAD.part". */
+    private static final java.util.regex.Pattern PART =
+            java.util.regex.Pattern.compile("\\..+\\.(\\d{1,18})\\.\\d+\\.part");
+
+    /**
+     * Removes the temporary files that workers no longer running left behind (a render killed
+     * part-way), so that finishing the film leaves only whole files; a live worker's are kept.
+     */
+    private static void removeDeadWorkersParts(Path dir) throws IOException {
+        if (!Files.isDirectory(dir)) {
+            return;
+        }
+        try (var s = Files.list(dir)) {
+            for (Path p : s.toList()) {
+                java.util.regex.Matcher m = PART.matcher(p.getFileName().toString());
+                if (m.matches() && !alive(Long.parseLong(m.group(1)))) {
+                    Files.deleteIfExists(p);
+                }
+            }
+        }
+    }
+
+    private static boolean alive(long pid) {
+        return ProcessHandle.of(pid).map(ProcessHandle::isAlive).orElse(false);
+    }
 
     private static Map<String, Object> describe(Path input, FilmSpec film, String cameraOption) {
         Map<String, Object> m = new LinkedHashMap<>();
