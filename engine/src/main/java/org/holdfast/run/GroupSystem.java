@@ -215,15 +215,9 @@ final class GroupSystem implements TrialSystem, SecondOrderSystem {
 
     @Override
     public void evaluate(double time, double[] pos, double[] vel, double[] acc, double[] rates) {
+        copyIn(time, pos, vel);
         Bodies b = bodies;
         int n = b.count();
-        System.arraycopy(pos, 0, b.x, 0, n);
-        System.arraycopy(pos, n, b.y, 0, n);
-        System.arraycopy(pos, 2 * n, b.z, 0, n);
-        System.arraycopy(vel, 0, b.vx, 0, n);
-        System.arraycopy(vel, n, b.vy, 0, n);
-        System.arraycopy(vel, 2 * n, b.vz, 0, n);
-        t = time;
         java.util.Arrays.fill(b.ax, 0, n, 0);
         java.util.Arrays.fill(b.ay, 0, n, 0);
         java.util.Arrays.fill(b.az, 0, n, 0);
@@ -242,20 +236,25 @@ final class GroupSystem implements TrialSystem, SecondOrderSystem {
         }
         double power = 0;
         if (friction != null) {
-            System.arraycopy(b.ax, 0, acc, 0, n);
-            System.arraycopy(b.ay, 0, acc, n, n);
-            System.arraycopy(b.az, 0, acc, 2 * n, n);
+            copyAccelerations(acc);
             friction.accelerate(b);
             for (int i = 0; i < n; i++) {
                 power += b.mass[i] * ((b.ax[i] - acc[i]) * b.vx[i] + (b.ay[i] - acc[n + i]) * b.vy[i]
                         + (b.az[i] - acc[2 * n + i]) * b.vz[i]);
             }
         }
+        copyAccelerations(acc);
+        rates[0] = work;
+        rates[1] = power;
+    }
+
+    /** Copies the bodies' accelerations into a flat x..., y..., z... array. */
+    private void copyAccelerations(double[] acc) {
+        Bodies b = bodies;
+        int n = b.count();
         System.arraycopy(b.ax, 0, acc, 0, n);
         System.arraycopy(b.ay, 0, acc, n, n);
         System.arraycopy(b.az, 0, acc, 2 * n, n);
-        rates[0] = work;
-        rates[1] = power;
     }
 
     /** Copies the bodies' positions and velocities into flat x..., y..., z... arrays. */
